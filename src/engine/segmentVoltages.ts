@@ -1,0 +1,54 @@
+import type { Topology } from "./types.ts";
+import { assertNever } from "./assertNever.ts";
+
+export interface Drops {
+  switchResistance: number;
+  switchDrop: number;
+  rectifierDrop: number;
+  rectifierResistance: number;
+  /** Inductor winding resistance at its present temperature, Ω. */
+  dcr: number;
+}
+
+export interface SegmentVoltages {
+  /** Inductor voltage while the switch is on (> 0 for a reachable point). */
+  on: number;
+  /** Inductor voltage while the rectifier conducts (< 0 for a reachable point). */
+  off: number;
+}
+
+/**
+ * Inductor voltage in each interval, with the switch, rectifier and winding drops taken at the
+ * average inductor current il (first order). Current positive in the direction it ramps up while
+ * the switch is on. Buck: on Vin − Vsw − Vo, off −(Vo + VD); boost: on Vin − Vsw, off Vin − Vo − VD;
+ * inverting buck-boost: on Vin − Vsw, off −(Vo + VD) (Erickson & Maksimović, ch. 2–3, with the
+ * drops by volt-second balance).
+ */
+export function segmentVoltages(topology: Topology, vin: number, vout: number, il: number, d: Drops): SegmentVoltages {
+  const vSwitch = d.switchDrop + d.switchResistance * il;
+  const vRectifier = d.rectifierDrop + d.rectifierResistance * il;
+  const vWinding = d.dcr * il;
+  switch (topology) {
+    case "buck":
+      return { on: vin - vSwitch - vout - vWinding, off: -(vout + vRectifier + vWinding) };
+    case "boost":
+      return { on: vin - vSwitch - vWinding, off: vin - vWinding - vout - vRectifier };
+    case "buck-boost":
+      return { on: vin - vSwitch - vWinding, off: -(vout + vRectifier + vWinding) };
+    default:
+      return assertNever(topology);
+  }
+}
+
+/** Average inductor current in CCM: buck Iout; boost and inverting Iout/(1 − D) (charge balance). */
+export function inductorCurrentCcm(topology: Topology, iout: number, duty: number): number {
+  switch (topology) {
+    case "buck":
+      return iout;
+    case "boost":
+    case "buck-boost":
+      return iout / (1 - duty);
+    default:
+      return assertNever(topology);
+  }
+}
