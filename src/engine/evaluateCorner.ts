@@ -7,7 +7,7 @@ import { igseTwoRamp } from "./coreLoss.ts";
 
 const THERMAL_ITERATIONS = 60;
 /** The DCR–temperature fixed point is settled when the temperature moves less than this, K. */
-const THERMAL_TOLERANCE = 0.005;
+const THERMAL_TOLERANCE = 1e-3;
 /** A winding this hot has run away thermally; stop iterating and report it. */
 const RUNAWAY_TEMPERATURE = 1000;
 

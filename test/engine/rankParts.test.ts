@@ -1,0 +1,71 @@
+import { describe, expect, it } from "vitest";
+import { makeSpec } from "../../src/engine/specDefaults.ts";
+import { completePart } from "../../src/engine/partDefaults.ts";
+import { rankParts } from "../../src/engine/rankParts.ts";
+import { paretoFront } from "../../src/engine/paretoFront.ts";
+import { rankOrder } from "../../src/engine/rankOrder.ts";
+import { scoreParts } from "../../src/engine/scoreParts.ts";
+import { DEFAULT_WEIGHTS } from "../../src/engine/specDefaults.ts";
+
+const spec = makeSpec({ topology: "buck", vin: { min: 10.8, nom: 12, max: 13.2 }, vout: 3.3, iout: { min: 0.2, max: 3 }, fsw: 500e3 });
+const base = { tolerance: 0.2, dcrTyp: 0.02, dcrMax: 0.024, isat: 7, irms: 5, srf: 40e6, length: 5e-3, width: 5e-3, height: 3e-3, price: 0.3 };
+
+describe("rankParts", () => {
+  it("rankParts puts passing parts first, then incomplete, then failing, ranks numbered from 1", () => {
+    const parts = [
+      completePart({ partNumber: "FAILS", inductance: 5.6e-6, ...base, isat: 2 }),
+      completePart({ partNumber: "NODATA", inductance: 5.6e-6, ...base, srf: null }),
+      completePart({ partNumber: "PASSES", inductance: 5.6e-6, ...base }),
+    ];
+    const results = rankParts(spec, parts);
+    expect(results.map((r) => r.partNumber)).toEqual(["PASSES", "NODATA", "FAILS"]);
+    expect(results.map((r) => r.rank)).toEqual([1, 2, 3]);
+    expect(results[0]!.pass).toBe(true);
+    expect(results[1]!.pass).toBe(false);
+    expect(results[2]!.failures[0]).toMatch(/^saturation: /);
+  });
+
+  it("rankParts scores the cheaper, lower-loss part higher among equals", () => {
+    const results = rankParts(spec, [
+      completePart({ partNumber: "DEAR", inductance: 5.6e-6, ...base, price: 0.9, dcrMax: 0.03 }),
+      completePart({ partNumber: "CHEAP", inductance: 5.6e-6, ...base, price: 0.2, dcrMax: 0.015 }),
+    ]);
+    expect(results[0]!.partNumber).toBe("CHEAP");
+    expect(results[0]!.score).toBeGreaterThan(results[1]!.score);
+  });
+});
+
+describe("scoreParts", () => {
+  it("scoreParts gives 100 to a part best on every figure and 0 for missing figures", () => {
+    const scores = scoreParts(
+      [
+        { loss: 0.1, footprint: 1, height: 1, price: 1, margin: 0.5 },
+        { loss: null, footprint: null, height: null, price: null, margin: null },
+      ],
+      [true, true],
+      DEFAULT_WEIGHTS,
+    );
+    expect(scores[0]).toBeCloseTo(100, 10);
+    expect(scores[1]).toBe(0);
+  });
+});
+
+describe("paretoFront", () => {
+  it("paretoFront flags exactly the undominated points of (loss, volume)", () => {
+    const loss = [1, 2, 3, 2, 4, null];
+    const volume = [5, 3, 1, 4, 0.5, 0.1];
+    expect(paretoFront(loss, volume)).toEqual([true, true, true, false, true, false]);
+  });
+
+  it("paretoFront keeps both of two identical undominated points", () => {
+    expect(paretoFront([1, 1, 2], [2, 2, 3])).toEqual([true, true, false]);
+  });
+});
+
+describe("rankOrder", () => {
+  it("rankOrder sorts by status then score (high first) with ties in list order, like a comparator would", () => {
+    const status = ["fail", "pass", "incomplete", "pass", "pass"] as const;
+    const score = [99, 50, 70, 80, 50];
+    expect(Array.from(rankOrder(status, score))).toEqual([3, 1, 4, 2, 0]);
+  });
+});
