@@ -23,10 +23,13 @@ export interface FluxCurve {
   readonly lambdaLimit: number;
   /** Zero-bias inductance L0, H. */
   readonly inductance: number;
+  /** True when L does not depend on current (closed forms apply). */
+  readonly constant: boolean;
 }
 
 export class ConstantInductance implements FluxCurve {
   readonly lambdaLimit = Infinity;
+  readonly constant = true;
   private readonly inverseL: number;
   constructor(readonly inductance: number) {
     this.inverseL = 1 / inductance;
@@ -144,6 +147,7 @@ export function rollOffRatio(current: number, ik: number, n: number): number {
 
 export class RollOffCurve implements FluxCurve {
   readonly lambdaLimit: number;
+  readonly constant = false;
   private readonly table: RollOffTable;
   private readonly lambdaScale: number;
   private readonly inverseLambdaScale: number;

@@ -52,3 +52,17 @@ export function inductorCurrentCcm(topology: Topology, iout: number, duty: numbe
       return assertNever(topology);
   }
 }
+
+/** Lossless CCM duty: buck Vo/Vin, boost 1 − Vin/Vo, inverting Vo/(Vin + Vo) (Erickson & Maksimović ch. 2). */
+export function idealDuty(topology: Topology, vin: number, vout: number): number {
+  switch (topology) {
+    case "buck":
+      return vout / vin;
+    case "boost":
+      return 1 - vin / vout;
+    case "buck-boost":
+      return vout / (vin + vout);
+    default:
+      return assertNever(topology);
+  }
+}

@@ -40,6 +40,7 @@ export const BCM_TOLERANCE = 0.02;
 const DUTY_ITERATIONS = 100;
 const NEWTON_ITERATIONS = 40;
 const RELATIVE_TOLERANCE = 1e-12;
+const STEP_TOLERANCE = 1e-10;
 
 function unreachable(duty: number): WaveformSolution {
   return {
@@ -91,9 +92,11 @@ function continuousDuty(p: OperatingPoint): { duty: number; il: number; on: numb
  * the exact derivative (i(λ0+Δλ) − i(λ0))/Δλ.
  */
 function valleyFlux(curve: FluxCurve, il: number, swing: number): { lambda0: number; beyond: boolean } {
+  // Constant L: mean = (λ0 + λ0 + Δλ)/(2L), so λ0 = L·IL − Δλ/2 exactly (the textbook valley).
+  if (curve.constant) return { lambda0: curve.inductance * il - swing / 2, beyond: false };
   const limit = curve.lambdaLimit;
   let lambda0 = curve.flux(il) - swing / 2;
-  const scale = Math.max(Math.abs(il), curve.current(swing) - curve.current(0), 1e-30);
+  const scale = Math.max(Math.abs(il), 1e-30);
   let beyond = false;
   for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
     beyond = false;
@@ -116,24 +119,31 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number): { lambda0: num
     if (beyond && ((lambda1 >= limit && error < 0) || (lambda0 <= -limit && error > 0))) break;
     const slope = (i1 - i0) / swing;
     if (!(slope > 0)) break;
-    lambda0 -= error / slope;
+    const step = error / slope;
+    lambda0 -= step;
+    // Newton converges quadratically: once the step is this small the remaining error is far smaller.
+    if (Math.abs(step) <= STEP_TOLERANCE * (Math.abs(lambda0) + swing)) break;
   }
   return { lambda0, beyond };
 }
 
 /** Peak flux p with G(p) = target (G is convex and increasing for p > 0; Newton with G' = i). */
 function peakFluxForIntegral(curve: FluxCurve, target: number): { peak: number; beyond: boolean } {
-  const limit = curve.lambdaLimit;
-  // G(p) ≥ p²/(2·L0) because L never exceeds L0, so this start is at or beyond the root and Newton descends monotonically.
+  // G(p) = p²/(2·L) for constant L; for roll-off G(p) ≥ p²/(2·L0) because L never exceeds L0,
+  // so this start is at or beyond the root and Newton descends monotonically.
   let peak = Math.sqrt(2 * curve.inductance * target);
+  if (curve.constant) return { peak, beyond: false };
+  const limit = curve.lambdaLimit;
   if (peak > limit) peak = limit;
   for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
     const g = curve.currentIntegral(peak);
     const i = curve.current(peak);
     const error = g - target;
     if (Math.abs(error) <= RELATIVE_TOLERANCE * target || !(i > 0)) break;
-    peak -= error / i;
+    const step = error / i;
+    peak -= step;
     if (peak >= limit) return { peak: limit, beyond: true };
+    if (Math.abs(step) <= STEP_TOLERANCE * peak) break;
   }
   return { peak, beyond: peak >= limit && curve.currentIntegral(limit) < target };
 }
@@ -218,7 +228,12 @@ function discontinuous(p: OperatingPoint, curve: FluxCurve, ilStart: number): Wa
 export function solveWaveform(p: OperatingPoint, curve: FluxCurve): WaveformSolution {
   const c = continuousDuty(p);
   if (c === null) return unreachable(1);
-  const ccm = continuous(p, curve, c);
-  if (p.rectifier === "synchronous" || ccm.ivalley >= 0) return ccm;
-  return discontinuous(p, curve, ccm.iavg);
+  if (p.rectifier === "diode") {
+    // The mean over a ramp rises with its starting flux, so the continuous valley would be
+    // negative exactly when a ramp from λ = 0 already averages more than IL: then the diode
+    // blocks and the current rests at zero.
+    const swing = (c.on * c.duty) / p.fsw;
+    if (curve.currentIntegral(swing) / swing > c.il) return discontinuous(p, curve, c.il);
+  }
+  return continuous(p, curve, c);
 }

@@ -1,5 +1,5 @@
 import type { Part } from "./types.ts";
-import { copperResistance } from "./copper.ts";
+import { COPPER_ALPHA20, copperResistance } from "./copper.ts";
 
 /** Common practice: makers rate heating current in a 25 °C ambient. */
 export const RATING_AMBIENT = 25;
@@ -35,4 +35,46 @@ export function isatAtTemperature(part: Part, tC: number): number | null {
   if (tC <= 25) return part.isat;
   const slope = (part.isatHot - part.isat) / (part.isatHotTemp - 25);
   return Math.max(part.isat * 0.05, part.isat + slope * (tC - 25));
+}
+
+/** A winding this hot has run away thermally; the solution stops there and says so. */
+export const RUNAWAY_TEMPERATURE = 1000;
+
+export interface ThermalBalance {
+  ambient: number;
+  /** Winding loss of the present waveform at the DCR's reference temperature, W. */
+  copperLossAtReference: number;
+  referenceTemperature: number;
+  /** Loss that does not scale with copper resistance (core), W. */
+  otherLoss: number;
+  ratedPower: number;
+  ratedRise: number;
+  exponent: number;
+  /** Where Newton starts, °C. */
+  start: number;
+}
+
+/**
+ * Temperature T with T = Ta + ΔTrated·(P(T)/Prated)^k, where the copper part of P grows as
+ * R(T) = R_ref·(1 + α20(T − 20))/(1 + α20(T_ref − 20)) (IEC 60028). Newton on
+ * h(T) = T − Ta − rise(P(T)); for k = 1 this is the self-consistent form
+ * ΔT = Rth·P20·(…)/(1 − Rth·P20·α20), which runs away when Rth·P20·α20 ≥ 1.
+ */
+export function settleTemperature(b: ThermalBalance): number {
+  const slope = (b.copperLossAtReference * COPPER_ALPHA20) / (1 + COPPER_ALPHA20 * (b.referenceTemperature - 20));
+  const base = b.copperLossAtReference - slope * b.referenceTemperature + b.otherLoss;
+  let t = b.start;
+  for (let iteration = 0; iteration < 50; iteration++) {
+    const p = base + slope * t;
+    // exp(k·ln x) rather than Math.pow: the same value, about half the time on V8.
+    const rise = p > 0 ? b.ratedRise * Math.exp(b.exponent * Math.log(p / b.ratedPower)) : 0;
+    const dh = 1 - (p > 0 ? (b.exponent * rise * slope) / p : 0);
+    if (!(dh > 0)) return RUNAWAY_TEMPERATURE;
+    const step = (t - b.ambient - rise) / dh;
+    const next = Math.max(t - step, b.ambient);
+    if (!(next < RUNAWAY_TEMPERATURE)) return RUNAWAY_TEMPERATURE;
+    t = next;
+    if (Math.abs(step) < 1e-4) return t;
+  }
+  return t;
 }
