@@ -1,8 +1,11 @@
 import { readFileSync } from "node:fs";
 import { basename } from "node:path";
 import type { Part } from "../engine/types.ts";
-import { decodeText, importPartList, parseMappingOverride, type ImportResult } from "../catalog/importPartList.ts";
-import { mergeLists } from "../catalog/mergeLists.ts";
+import { decodeText } from "../catalog/decodeText.ts";
+import { importPartList } from "../catalog/importPartList.ts";
+import { parseMappingOverride } from "../catalog/parseMappingOverride.ts";
+import { mergeLists, type MergeDuplicate } from "../catalog/mergeLists.ts";
+import type { ImportResult, MappingOverride } from "../catalog/types.ts";
 import { CliError } from "./cliError.ts";
 
 export interface RejectedEntry {
@@ -16,7 +19,7 @@ export interface LoadedParts {
   parts: Part[];
   rejected: RejectedEntry[];
   imports: { file: string; result: ImportResult }[];
-  duplicates: string[];
+  duplicates: MergeDuplicate[];
 }
 
 /** Reads one part list with the importer; a file that cannot be read is a CLI error naming it. */
@@ -27,7 +30,7 @@ export function readPartFile(file: string, mapOverrides: string[] = []): ImportR
   } catch (error) {
     throw new CliError(`${file}: cannot read the part list (${(error as NodeJS.ErrnoException).code ?? String(error)})`);
   }
-  const overrides = mapOverrides.map((text) => {
+  const overrides: MappingOverride[] = mapOverrides.map((text) => {
     const parsed = parseMappingOverride(text);
     if (typeof parsed === "string") throw new CliError(`--map "${text}": ${parsed}`);
     return parsed;
@@ -41,11 +44,7 @@ export function readParts(files: string[] | undefined, mapOverrides: string[] = 
   const imports = files.map((file) => ({ file, result: readPartFile(file, mapOverrides) }));
   const merged = mergeLists(imports.map(({ file, result }) => ({ name: file, parts: result.parts })));
   const rejected = imports.flatMap(({ file, result }) =>
-    result.rejected.map((r) => ({ file, row: r.row, field: r.field ?? null, reason: r.reason })),
+    result.rejected.map((r) => ({ file, row: r.row, field: r.field, reason: r.reason })),
   );
-  return { parts: merged.parts, rejected, imports, duplicates: merged.duplicates.map((d) => describeDuplicate(d)) };
-}
-
-function describeDuplicate(d: unknown): string {
-  return typeof d === "string" ? d : JSON.stringify(d);
+  return { parts: merged.parts, rejected, imports, duplicates: merged.duplicates };
 }

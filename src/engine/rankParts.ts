@@ -14,7 +14,8 @@ export function rankEvaluations(spec: Spec, evaluations: PartEvaluation[]): Resu
   const reference = evaluations.map((e) => (anyPass ? e.status === "pass" : true));
   const scores = scoreParts(
     evaluations.map((e) => ({
-      loss: Number.isFinite(e.worst.totalLoss.value) ? e.worst.totalLoss.value : null,
+      // A part that cannot reach the output at some corner has no meaningful loss figure.
+      loss: Number.isFinite(e.worst.totalLoss.value) && !e.corners.some((c) => c.unreachable) ? e.worst.totalLoss.value : null,
       footprint: e.part.length !== null && e.part.width !== null ? e.part.length * e.part.width : null,
       height: e.part.height,
       price: e.part.price,
@@ -32,6 +33,7 @@ export function rankEvaluations(spec: Spec, evaluations: PartEvaluation[]): Resu
   const order = rankOrder(
     evaluations.map((e) => e.status),
     scores,
+    evaluations.map((e) => e.failures.length),
   );
   const results: Result[] = [];
   order.forEach((index, position) => {

@@ -69,3 +69,10 @@ describe("rankOrder", () => {
     expect(Array.from(rankOrder(status, score))).toEqual([3, 1, 4, 2, 0]);
   });
 });
+
+describe("rankOrder among failing parts", () => {
+  it("rankOrder puts failing parts with fewer failed checks first, whatever their score", () => {
+    const status = ["fail", "fail", "fail"] as const;
+    expect(Array.from(rankOrder(status, [90, 10, 50], [3, 1, 1]))).toEqual([2, 1, 0]);
+  });
+});
