@@ -1,6 +1,6 @@
 import type { CornerPoint, CornerResult, Part, Spec } from "./types.ts";
 import { ConstantInductance, type FluxCurve, RollOffCurve, knee } from "./fluxCurve.ts";
-import { type OperatingPoint, solveWaveform, type WaveformSolution } from "./solveWaveform.ts";
+import { emptySolution, type OperatingPoint, solveWaveform, type WaveformSolution } from "./solveWaveform.ts";
 import { copperResistance } from "./copper.ts";
 import { RUNAWAY_TEMPERATURE, type ThermalBalance, isatAtTemperature, ratedHeatingPower, settleTemperature } from "./thermal.ts";
 import { idealDuty, inductorCurrentCcm } from "./segmentVoltages.ts";
@@ -72,104 +72,188 @@ function acLossFactor(solution: WaveformSolution, acFactor: number): number {
 }
 
 /**
- * One operating corner of one part: the waveform, losses and temperature, with the winding
- * resistance, the saturation current and the temperature solved together as a fixed point.
+ * Solves corners one after another, reusing its curves and scratch objects so that ranking a
+ * large list allocates nothing per corner. The figures of the last solve are its fields.
  */
-export function evaluateCorner(spec: Spec, part: Part, point: CornerPoint, prepared: PreparedPart = preparePart(part)): CornerResult {
-  const { dcrRef, ratedPower } = prepared;
-  const thermal = ratedPower !== null && dcrRef !== null;
-  const balance: ThermalBalance = {
-    ambient: spec.ambient,
-    copperLossAtReference: 0,
-    referenceTemperature: part.dcrTemp,
-    otherLoss: 0,
-    ratedPower: ratedPower ?? 1,
-    ratedRise: part.irmsRise,
-    exponent: spec.thermalExponent,
-    start: spec.ambient,
-  };
-  let temperature = spec.ambient;
-  if (thermal) {
-    // Start from the rise that the DC part of the inductor current alone would cause.
-    const il = inductorCurrentCcm(spec.topology, point.iout, idealDuty(spec.topology, point.vin, spec.vout));
-    balance.copperLossAtReference = il * il * dcrRef;
-    temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+export class CornerSolver {
+  readonly solution: WaveformSolution = emptySolution();
+  temperature = 0;
+  tempRise: number | null = null;
+  dcrHot: number | null = null;
+  dcrLoss = 0;
+  acLoss = 0;
+  coreLoss: number | null = null;
+  totalLoss = 0;
+  isatAtTemp: number | null = null;
+  inductanceAtPeak = 0;
+  irms = 0;
+  ripple = 0;
+  rippleRatio = 0;
+  private curve: FluxCurve;
+  private readonly constantCurve = new ConstantInductance(1);
+  private readonly rollOffCurve = new RollOffCurve(1, 1, 2);
+  private readonly op: OperatingPoint;
+  private readonly balance: ThermalBalance;
+  // The last corner's load and temperature: the next corner of the same part at the same load
+  // (another inductance corner) starts its thermal solution there.
+  private guessPart: Part | null = null;
+  private guessIout = NaN;
+  private guessTemperature = 0;
+
+  constructor(private readonly spec: Spec) {
+    this.curve = this.constantCurve;
+    this.op = {
+      topology: spec.topology,
+      rectifier: spec.rectifier,
+      vin: 0,
+      vout: spec.vout,
+      iout: 0,
+      fsw: spec.fsw,
+      drops: {
+        switchResistance: spec.switchResistance,
+        switchDrop: spec.switchDrop,
+        rectifierDrop: spec.rectifierDrop,
+        rectifierResistance: spec.rectifierResistance,
+        dcr: 0,
+      },
+    };
+    this.balance = {
+      ambient: spec.ambient,
+      copperLossAtReference: 0,
+      referenceTemperature: 25,
+      otherLoss: 0,
+      ratedPower: 1,
+      ratedRise: 40,
+      exponent: spec.thermalExponent,
+      start: spec.ambient,
+    };
   }
-  let curve: FluxCurve = partCurve(part, point.inductance, temperature, prepared.knee25);
-  let isatSolved = isatAtTemperature(part, temperature);
-  const op: OperatingPoint = {
-    topology: spec.topology,
-    rectifier: spec.rectifier,
-    vin: point.vin,
-    vout: spec.vout,
-    iout: point.iout,
-    fsw: spec.fsw,
-    drops: {
-      switchResistance: spec.switchResistance,
-      switchDrop: spec.switchDrop,
-      rectifierDrop: spec.rectifierDrop,
-      rectifierResistance: spec.rectifierResistance,
-      dcr: dcrRef === null ? 0 : copperResistance(dcrRef, part.dcrTemp, temperature),
-    },
-  };
-  let solution = solveWaveform(op, curve);
-  let dcrHot = dcrRef === null ? null : op.drops.dcr;
-  let core = coreLossOf(part, solution, spec.fsw);
-  // Settle the temperature for this waveform's RMS current and core loss (copper loss ∝ R(T));
-  // solve again only while that temperature still moves the winding drop or Isat noticeably.
-  for (let iteration = 0; thermal && !solution.unreachable && iteration < THERMAL_ITERATIONS; iteration++) {
-    balance.copperLossAtReference = windingLoss(solution, dcrRef, part.acFactor);
-    balance.otherLoss = core ?? 0;
-    balance.start = temperature;
-    temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
-    dcrHot = copperResistance(dcrRef, part.dcrTemp, temperature);
-    if (temperature >= RUNAWAY_TEMPERATURE) break;
-    const isatNow = isatAtTemperature(part, temperature);
-    const isatShift = isatNow === null || isatSolved === null ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
-    const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
-    if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
-    if (isatShift > 0) {
-      curve = partCurve(part, point.inductance, temperature, prepared.knee25);
-      isatSolved = isatNow;
+
+  private setCurve(prepared: PreparedPart, inductance: number, isat: number | null): void {
+    const part = prepared.part;
+    if (isat === null || prepared.knee25 === null) {
+      this.curve = this.constantCurve.set(inductance);
+    } else {
+      // Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C.
+      this.curve = this.rollOffCurve.set(inductance, (prepared.knee25 * isat) / (part.isat as number), part.rollOffExponent);
     }
-    op.drops.dcr = dcrHot;
-    solution = solveWaveform(op, curve);
-    core = coreLossOf(part, solution, spec.fsw);
   }
-  const s = solution;
-  const ripple = s.ipk - s.ivalley;
-  const dcrLoss = dcrHot === null ? 0 : s.meanSquare * dcrHot;
-  const acLoss = dcrHot === null ? 0 : acLossFactor(s, part.acFactor) * dcrHot;
-  // Fields listed one by one: a spread followed by many properties makes V8 build slow dictionary objects.
-  return {
-    vin: point.vin,
-    iout: point.iout,
-    vinCorner: point.vinCorner,
-    ioutCorner: point.ioutCorner,
-    inductanceCorner: point.inductanceCorner,
-    inductance: point.inductance,
-    mode: s.mode,
-    duty: s.duty,
-    d2: s.d2,
-    idle: s.idle,
-    negativeFraction: s.negativeFraction,
-    ipk: s.ipk,
-    ivalley: s.ivalley,
-    iavg: s.iavg,
-    irms: Math.sqrt(s.meanSquare),
-    ripple,
-    rippleRatio: s.iavg !== 0 ? ripple / Math.abs(s.iavg) : Infinity,
-    fluxSwing: s.fluxSwing,
-    inductanceAtPeak: curve.inductanceAt(s.ipk > -s.ivalley ? s.ipk : -s.ivalley),
-    dcrLoss,
-    acLoss,
-    coreLoss: core,
-    totalLoss: dcrLoss + acLoss + (core ?? 0),
-    tempRise: thermal && !s.unreachable ? temperature - spec.ambient : null,
-    temperature,
-    dcrHot,
-    isatAtTemp: isatAtTemperature(part, temperature),
-    beyondCurve: s.beyondCurve,
-    unreachable: s.unreachable,
-  };
+
+  /**
+   * One operating corner: the waveform, losses and temperature, with the winding resistance,
+   * the saturation current and the temperature solved together as a fixed point.
+   */
+  solve(prepared: PreparedPart, vin: number, iout: number, inductance: number): void {
+    const { spec, op, balance } = this;
+    const { part, dcrRef, ratedPower } = prepared;
+    const thermal = ratedPower !== null && dcrRef !== null;
+    balance.referenceTemperature = part.dcrTemp;
+    balance.ratedPower = ratedPower ?? 1;
+    balance.ratedRise = part.irmsRise;
+    balance.otherLoss = 0;
+    balance.start = spec.ambient;
+    let temperature = spec.ambient;
+    if (thermal && part === this.guessPart && iout === this.guessIout) {
+      temperature = this.guessTemperature;
+    } else if (thermal) {
+      // Start from the rise that the DC part of the inductor current alone would cause.
+      const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
+      balance.copperLossAtReference = il * il * dcrRef;
+      temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+    }
+    let isatSolved = isatAtTemperature(part, temperature);
+    this.setCurve(prepared, inductance, isatSolved);
+    op.vin = vin;
+    op.iout = iout;
+    op.drops.dcr = dcrRef === null ? 0 : copperResistance(dcrRef, part.dcrTemp, temperature);
+    const solution = solveWaveform(op, this.curve, this.solution);
+    let dcrHot = dcrRef === null ? null : op.drops.dcr;
+    let core = coreLossOf(part, solution, spec.fsw);
+    // Settle the temperature for this waveform's RMS current and core loss (copper loss ∝ R(T));
+    // solve again only while that temperature still moves the winding drop or Isat noticeably.
+    for (let iteration = 0; thermal && !solution.unreachable && iteration < THERMAL_ITERATIONS; iteration++) {
+      balance.copperLossAtReference = windingLoss(solution, dcrRef, part.acFactor);
+      balance.otherLoss = core ?? 0;
+      balance.start = temperature;
+      temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+      dcrHot = copperResistance(dcrRef, part.dcrTemp, temperature);
+      if (temperature >= RUNAWAY_TEMPERATURE) break;
+      const isatNow = isatAtTemperature(part, temperature);
+      const isatShift = isatNow === null || isatSolved === null ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
+      const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
+      if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
+      if (isatShift > 0) {
+        this.setCurve(prepared, inductance, isatNow);
+        isatSolved = isatNow;
+      }
+      op.drops.dcr = dcrHot;
+      solveWaveform(op, this.curve, solution);
+      core = coreLossOf(part, solution, spec.fsw);
+    }
+    const ripple = solution.ipk - solution.ivalley;
+    this.guessPart = part;
+    this.guessIout = iout;
+    this.guessTemperature = temperature;
+    this.temperature = temperature;
+    this.tempRise = thermal && !solution.unreachable ? temperature - spec.ambient : null;
+    this.dcrHot = dcrHot;
+    this.dcrLoss = dcrHot === null ? 0 : solution.meanSquare * dcrHot;
+    this.acLoss = dcrHot === null ? 0 : acLossFactor(solution, part.acFactor) * dcrHot;
+    this.coreLoss = core;
+    this.totalLoss = this.dcrLoss + this.acLoss + (core ?? 0);
+    this.isatAtTemp = isatAtTemperature(part, temperature);
+    this.irms = Math.sqrt(solution.meanSquare);
+    this.ripple = ripple;
+    this.rippleRatio = solution.iavg !== 0 ? ripple / Math.abs(solution.iavg) : Infinity;
+    this.inductanceAtPeak = this.curve.inductanceAt(solution.ipk > -solution.ivalley ? solution.ipk : -solution.ivalley);
+  }
+
+  /** Forgets the warm start, so that a part's corners come out the same whichever part came before. */
+  startPart(): void {
+    this.guessPart = null;
+  }
+
+  /** The last solve as a plain CornerResult. */
+  result(point: CornerPoint): CornerResult {
+    const s = this.solution;
+    // Fields listed one by one: a spread followed by many properties makes V8 build slow dictionary objects.
+    return {
+      vin: point.vin,
+      iout: point.iout,
+      vinCorner: point.vinCorner,
+      ioutCorner: point.ioutCorner,
+      inductanceCorner: point.inductanceCorner,
+      inductance: point.inductance,
+      mode: s.mode,
+      duty: s.duty,
+      d2: s.d2,
+      idle: s.idle,
+      negativeFraction: s.negativeFraction,
+      ipk: s.ipk,
+      ivalley: s.ivalley,
+      iavg: s.iavg,
+      irms: this.irms,
+      ripple: this.ripple,
+      rippleRatio: this.rippleRatio,
+      fluxSwing: s.fluxSwing,
+      inductanceAtPeak: this.inductanceAtPeak,
+      dcrLoss: this.dcrLoss,
+      acLoss: this.acLoss,
+      coreLoss: this.coreLoss,
+      totalLoss: this.totalLoss,
+      tempRise: this.tempRise,
+      temperature: this.temperature,
+      dcrHot: this.dcrHot,
+      isatAtTemp: this.isatAtTemp,
+      beyondCurve: s.beyondCurve,
+      unreachable: s.unreachable,
+    };
+  }
+}
+
+/** One operating corner of one part (see CornerSolver.solve). */
+export function evaluateCorner(spec: Spec, part: Part, point: CornerPoint, prepared: PreparedPart = preparePart(part)): CornerResult {
+  const solver = new CornerSolver(spec);
+  solver.solve(prepared, point.vin, point.iout, point.inductance);
+  return solver.result(point);
 }

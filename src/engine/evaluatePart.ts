@@ -1,7 +1,8 @@
 import type { Check, CornerResult, Part, ResultStatus, Spec, Worst } from "./types.ts";
-import { cornerPoints } from "./cornerPoints.ts";
-import { evaluateCorner } from "./evaluateCorner.ts";
-import { partChecks, worstCase } from "./partChecks.ts";
+import { cornerPoints, describeCorner, effectiveTolerance } from "./cornerPoints.ts";
+import { CornerSolver, preparePart } from "./evaluateCorner.ts";
+import { CornerAccumulator } from "./cornerAccumulator.ts";
+import { partChecks } from "./partChecks.ts";
 
 export interface PartEvaluation {
   part: Part;
@@ -16,18 +17,46 @@ export interface PartEvaluation {
 
 /** Smallest current margin: saturation or heating headroom as a fraction, null when neither is known. */
 export function minimumMargin(checks: Check[]): number | null {
-  const margins = checks
-    .filter((c) => (c.name === "saturation" || c.name === "heating") && c.margin !== null && c.status !== "unchecked")
-    .map((c) => c.margin as number);
-  return margins.length === 0 ? null : Math.min(...margins);
+  let smallest: number | null = null;
+  for (const c of checks) {
+    if ((c.name === "saturation" || c.name === "heating") && c.margin !== null && c.status !== "unchecked") {
+      smallest = smallest === null ? c.margin : Math.min(smallest, c.margin);
+    }
+  }
+  return smallest;
 }
 
-/** Every corner, check and worst case of one part against the spec. */
-export function evaluatePart(spec: Spec, part: Part): PartEvaluation {
-  const corners = cornerPoints(spec, part).map((point) => evaluateCorner(spec, part, point));
-  const checks = partChecks(spec, part, corners);
-  const failures = checks.filter((c) => c.status === "fail").map((c) => `${c.name}: ${c.reason}`);
-  const unchecked = checks.filter((c) => c.status === "unchecked").map((c) => c.reason);
-  const status: ResultStatus = failures.length > 0 ? "fail" : unchecked.length > 0 ? "incomplete" : "pass";
-  return { part, status, failures, unchecked, checks, minMargin: minimumMargin(checks), worst: worstCase(corners), corners };
+/** pass only when every check ran and passed; incomplete when nothing failed but some could not run. */
+export function statusOf(checks: Check[]): ResultStatus {
+  let unchecked = false;
+  for (const c of checks) {
+    if (c.status === "fail") return "fail";
+    if (c.status === "unchecked") unchecked = true;
+  }
+  return unchecked ? "incomplete" : "pass";
+}
+
+/** Every corner, check and worst case of one part against the spec, with readable reasons. */
+export function evaluatePart(spec: Spec, part: Part, solver: CornerSolver = new CornerSolver(spec)): PartEvaluation {
+  const points = cornerPoints(spec, part);
+  const prepared = preparePart(part);
+  const acc = new CornerAccumulator(spec, part.isat);
+  solver.startPart();
+  const corners = points.map((p, index) => {
+    solver.solve(prepared, p.vin, p.iout, p.inductance);
+    acc.add(solver.solution, solver, p.vin, p.iout, index);
+    return solver.result(p);
+  });
+  const tolerance = effectiveTolerance(spec, part);
+  const checks = partChecks(spec, part, acc, (index) => describeCorner(points[index]!, tolerance));
+  return {
+    part,
+    status: statusOf(checks),
+    failures: checks.filter((c) => c.status === "fail").map((c) => `${c.name}: ${c.reason}`),
+    unchecked: checks.filter((c) => c.status === "unchecked").map((c) => c.reason),
+    checks,
+    minMargin: minimumMargin(checks),
+    worst: acc.worst(),
+    corners,
+  };
 }

@@ -27,12 +27,19 @@ export interface FluxCurve {
   readonly constant: boolean;
 }
 
+/** Constant L. Mutable through set() so a hot loop can reuse one instance. */
 export class ConstantInductance implements FluxCurve {
   readonly lambdaLimit = Infinity;
   readonly constant = true;
-  private readonly inverseL: number;
-  constructor(readonly inductance: number) {
+  inductance = 0;
+  private inverseL = 0;
+  constructor(inductance: number) {
+    this.set(inductance);
+  }
+  set(inductance: number): this {
+    this.inductance = inductance;
     this.inverseL = 1 / inductance;
+    return this;
   }
   current(lambda: number): number {
     return lambda * this.inverseL;
@@ -142,34 +149,46 @@ export function knee(isat: number, drop: number, n: number): number {
 
 /** Differential inductance ratio L(i)/L0 of the roll-off law. */
 export function rollOffRatio(current: number, ik: number, n: number): number {
-  return 1 / (1 + Math.pow(Math.abs(current) / ik, n));
+  const x = Math.abs(current) / ik;
+  // exp(n·ln x) rather than Math.pow: the same value, about half the time on V8.
+  return x === 0 ? 1 : 1 / (1 + Math.exp(n * Math.log(x)));
 }
 
+/** The tabulated roll-off law. Mutable through set() so a hot loop can reuse one instance. */
 export class RollOffCurve implements FluxCurve {
-  readonly lambdaLimit: number;
+  lambdaLimit = 0;
   readonly constant = false;
-  private readonly table: RollOffTable;
-  private readonly lambdaScale: number;
-  private readonly inverseLambdaScale: number;
-  private readonly gScale: number;
-  private readonly hScale: number;
-  // Interval found by the last lookup, shared by the three evaluations at the same λ.
+  inductance = 0;
+  ik = 0;
+  n = 0;
+  private table: RollOffTable;
+  private lambdaScale = 0;
+  private inverseLambdaScale = 0;
+  private gScale = 0;
+  private hScale = 0;
+  // Interval found by the last lookup, shared by the evaluations at the same λ.
   private lastY = NaN;
   private lastK = 0;
   private lastT = 0;
   private lastHy = 0;
 
-  constructor(
-    readonly inductance: number,
-    readonly ik: number,
-    readonly n: number,
-  ) {
+  constructor(inductance: number, ik: number, n: number) {
     this.table = rollOffTable(n);
+    this.set(inductance, ik, n);
+  }
+
+  set(inductance: number, ik: number, n: number): this {
+    if (n !== this.n) this.table = rollOffTable(n);
+    this.inductance = inductance;
+    this.ik = ik;
+    this.n = n;
     this.lambdaScale = inductance * ik;
     this.inverseLambdaScale = 1 / this.lambdaScale;
     this.gScale = inductance * ik * ik;
     this.hScale = inductance * ik * ik * ik;
     this.lambdaLimit = this.table.yMax * this.lambdaScale;
+    this.lastY = NaN;
+    return this;
   }
 
   /** Locates |y| in the table; y beyond the table is clamped to its end. */

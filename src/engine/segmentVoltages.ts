@@ -24,17 +24,30 @@ export interface SegmentVoltages {
  * inverting buck-boost: on Vin − Vsw, off −(Vo + VD) (Erickson & Maksimović, ch. 2–3, with the
  * drops by volt-second balance).
  */
-export function segmentVoltages(topology: Topology, vin: number, vout: number, il: number, d: Drops): SegmentVoltages {
+export function segmentVoltages(
+  topology: Topology,
+  vin: number,
+  vout: number,
+  il: number,
+  d: Drops,
+  out: SegmentVoltages = { on: 0, off: 0 },
+): SegmentVoltages {
   const vSwitch = d.switchDrop + d.switchResistance * il;
   const vRectifier = d.rectifierDrop + d.rectifierResistance * il;
   const vWinding = d.dcr * il;
   switch (topology) {
     case "buck":
-      return { on: vin - vSwitch - vout - vWinding, off: -(vout + vRectifier + vWinding) };
+      out.on = vin - vSwitch - vout - vWinding;
+      out.off = -(vout + vRectifier + vWinding);
+      return out;
     case "boost":
-      return { on: vin - vSwitch - vWinding, off: vin - vWinding - vout - vRectifier };
+      out.on = vin - vSwitch - vWinding;
+      out.off = vin - vWinding - vout - vRectifier;
+      return out;
     case "buck-boost":
-      return { on: vin - vSwitch - vWinding, off: -(vout + vRectifier + vWinding) };
+      out.on = vin - vSwitch - vWinding;
+      out.off = -(vout + vRectifier + vWinding);
+      return out;
     default:
       return assertNever(topology);
   }

@@ -1,6 +1,6 @@
 import type { Mode, Rectifier, Topology } from "./types.ts";
 import type { FluxCurve } from "./fluxCurve.ts";
-import { type Drops, inductorCurrentCcm, segmentVoltages } from "./segmentVoltages.ts";
+import { type Drops, inductorCurrentCcm, segmentVoltages, type SegmentVoltages } from "./segmentVoltages.ts";
 
 export interface OperatingPoint {
   topology: Topology;
@@ -40,12 +40,16 @@ export const BCM_TOLERANCE = 0.02;
 const DUTY_ITERATIONS = 100;
 const NEWTON_ITERATIONS = 40;
 const RELATIVE_TOLERANCE = 1e-12;
-const STEP_TOLERANCE = 1e-10;
+/**
+ * Newton stops once a step is this small relative to the flux scale: convergence is quadratic,
+ * so the error left is of the order of its square times the curvature, far below 1e-8.
+ */
+const STEP_TOLERANCE = 1e-5;
 
-function unreachable(duty: number): WaveformSolution {
+export function emptySolution(): WaveformSolution {
   return {
     mode: "ccm",
-    duty,
+    duty: 0,
     d2: 0,
     idle: 0,
     lambdaValley: 0,
@@ -58,55 +62,85 @@ function unreachable(duty: number): WaveformSolution {
     meanSquare: 0,
     negativeFraction: 0,
     beyondCurve: false,
-    unreachable: true,
+    unreachable: false,
   };
 }
+
+function markUnreachable(out: WaveformSolution, duty: number): WaveformSolution {
+  out.mode = "ccm";
+  out.duty = duty;
+  out.d2 = 0;
+  out.idle = 0;
+  out.lambdaValley = 0;
+  out.fluxSwing = 0;
+  out.vOn = 0;
+  out.vOff = 0;
+  out.ipk = 0;
+  out.ivalley = 0;
+  out.iavg = 0;
+  out.meanSquare = 0;
+  out.negativeFraction = 0;
+  out.beyondCurve = false;
+  out.unreachable = true;
+  return out;
+}
+
+/** Scratch of one solve, reused so the hot path allocates nothing. */
+interface Scratch {
+  v: SegmentVoltages;
+  duty: number;
+  il: number;
+  beyond: boolean;
+}
+const scratch: Scratch = { v: { on: 0, off: 0 }, duty: 0, il: 0, beyond: false };
 
 /**
  * Duty and average inductor current in continuous conduction: volt-second balance
  * D·von + (1 − D)·voff = 0 with the drops at the average current, solved by fixed-point iteration
  * (for the boost it converges to the physical root of a·D'² − b·D' + c = 0; no root = unreachable).
+ * Leaves duty, il and the segment voltages in the scratch; false when unreachable.
  */
-function continuousDuty(p: OperatingPoint): { duty: number; il: number; on: number; off: number } | null {
+function continuousDuty(p: OperatingPoint, s: Scratch): boolean {
   let il = p.iout;
-  let duty = 0;
   for (let iteration = 0; iteration < DUTY_ITERATIONS; iteration++) {
-    const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops);
-    if (!(v.on > 0) || !(v.off < 0)) return null;
-    duty = -v.off / (v.on - v.off);
+    const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops, s.v);
+    if (!(v.on > 0) || !(v.off < 0)) return false;
+    const duty = -v.off / (v.on - v.off);
     const next = inductorCurrentCcm(p.topology, p.iout, duty);
-    if (!(duty < 1) || !Number.isFinite(next)) return null;
+    if (!(duty < 1) || !Number.isFinite(next)) return false;
     const settled = Math.abs(next - il) <= RELATIVE_TOLERANCE * Math.max(1, Math.abs(next));
     il = next;
     if (settled || p.topology === "buck") {
-      const w = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops);
-      return { duty: -w.off / (w.on - w.off), il, on: w.on, off: w.off };
+      const w = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops, s.v);
+      s.duty = -w.off / (w.on - w.off);
+      s.il = il;
+      return true;
     }
   }
-  return null;
+  return false;
 }
 
 /**
  * λ0 so that the mean current over the ramp λ0 → λ0 + Δλ equals il. Time is linear in λ on
  * each ramp and both ramps span the same λ range, so mean = (G(λ0+Δλ) − G(λ0))/Δλ; Newton with
- * the exact derivative (i(λ0+Δλ) − i(λ0))/Δλ.
+ * the exact derivative (i(λ0+Δλ) − i(λ0))/Δλ. Sets s.beyond when the curve's end is reached.
  */
-function valleyFlux(curve: FluxCurve, il: number, swing: number): { lambda0: number; beyond: boolean } {
+function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): number {
+  s.beyond = false;
   // Constant L: mean = (λ0 + λ0 + Δλ)/(2L), so λ0 = L·IL − Δλ/2 exactly (the textbook valley).
-  if (curve.constant) return { lambda0: curve.inductance * il - swing / 2, beyond: false };
+  if (curve.constant) return curve.inductance * il - swing / 2;
   const limit = curve.lambdaLimit;
   let lambda0 = curve.flux(il) - swing / 2;
   const scale = Math.max(Math.abs(il), 1e-30);
-  let beyond = false;
   for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
-    beyond = false;
+    s.beyond = false;
     if (lambda0 + swing > limit) {
       lambda0 = limit - swing;
-      beyond = true;
+      s.beyond = true;
     }
     if (lambda0 < -limit) {
       lambda0 = -limit;
-      beyond = true;
+      s.beyond = true;
     }
     const lambda1 = lambda0 + swing;
     const g1 = curve.currentIntegral(lambda1);
@@ -116,7 +150,7 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number): { lambda0: num
     const error = (g1 - g0) / swing - il;
     if (Math.abs(error) <= RELATIVE_TOLERANCE * scale) break;
     // Clamped at the end of the curve and the root lies further out: the core is past saturation.
-    if (beyond && ((lambda1 >= limit && error < 0) || (lambda0 <= -limit && error > 0))) break;
+    if (s.beyond && ((lambda1 >= limit && error < 0) || (lambda0 <= -limit && error > 0))) break;
     const slope = (i1 - i0) / swing;
     if (!(slope > 0)) break;
     const step = error / slope;
@@ -124,15 +158,16 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number): { lambda0: num
     // Newton converges quadratically: once the step is this small the remaining error is far smaller.
     if (Math.abs(step) <= STEP_TOLERANCE * (Math.abs(lambda0) + swing)) break;
   }
-  return { lambda0, beyond };
+  return lambda0;
 }
 
 /** Peak flux p with G(p) = target (G is convex and increasing for p > 0; Newton with G' = i). */
-function peakFluxForIntegral(curve: FluxCurve, target: number): { peak: number; beyond: boolean } {
+function peakFluxForIntegral(curve: FluxCurve, target: number, s: Scratch): number {
+  s.beyond = false;
   // G(p) = p²/(2·L) for constant L; for roll-off G(p) ≥ p²/(2·L0) because L never exceeds L0,
   // so this start is at or beyond the root and Newton descends monotonically.
   let peak = Math.sqrt(2 * curve.inductance * target);
-  if (curve.constant) return { peak, beyond: false };
+  if (curve.constant) return peak;
   const limit = curve.lambdaLimit;
   if (peak > limit) peak = limit;
   for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
@@ -142,42 +177,39 @@ function peakFluxForIntegral(curve: FluxCurve, target: number): { peak: number; 
     if (Math.abs(error) <= RELATIVE_TOLERANCE * target || !(i > 0)) break;
     const step = error / i;
     peak -= step;
-    if (peak >= limit) return { peak: limit, beyond: true };
+    if (peak >= limit) {
+      s.beyond = true;
+      return limit;
+    }
     if (Math.abs(step) <= STEP_TOLERANCE * peak) break;
   }
-  return { peak, beyond: peak >= limit && curve.currentIntegral(limit) < target };
+  s.beyond = peak >= limit && curve.currentIntegral(limit) < target;
+  return peak;
 }
 
-function continuous(p: OperatingPoint, curve: FluxCurve, c: { duty: number; il: number; on: number; off: number }): WaveformSolution {
-  const ts = 1 / p.fsw;
-  const swing = c.on * c.duty * ts;
-  const { lambda0, beyond } = valleyFlux(curve, c.il, swing);
+function continuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
+  const swing = (s.v.on * s.duty) / p.fsw;
+  const lambda0 = valleyFlux(curve, s.il, swing, s);
   const lambda1 = lambda0 + swing;
   const ipk = curve.current(lambda1);
   const ivalley = curve.current(lambda0);
   const ripple = ipk - ivalley;
-  const meanSquare = (curve.squareIntegral(lambda1) - curve.squareIntegral(lambda0)) / swing;
-  let mode: Mode;
-  if (ivalley > BCM_TOLERANCE * ripple) mode = "ccm";
-  else if (ivalley >= -BCM_TOLERANCE * ripple) mode = "bcm";
-  else mode = "forced-continuous";
-  return {
-    mode,
-    duty: c.duty,
-    d2: 1 - c.duty,
-    idle: 0,
-    lambdaValley: lambda0,
-    fluxSwing: swing,
-    vOn: c.on,
-    vOff: c.off,
-    ipk,
-    ivalley,
-    iavg: c.il,
-    meanSquare,
-    negativeFraction: lambda0 < 0 ? Math.min(1, -lambda0 / swing) : 0,
-    beyondCurve: beyond,
-    unreachable: false,
-  };
+  out.meanSquare = (curve.squareIntegral(lambda1) - curve.squareIntegral(lambda0)) / swing;
+  out.mode = ivalley > BCM_TOLERANCE * ripple ? "ccm" : ivalley >= -BCM_TOLERANCE * ripple ? "bcm" : "forced-continuous";
+  out.duty = s.duty;
+  out.d2 = 1 - s.duty;
+  out.idle = 0;
+  out.lambdaValley = lambda0;
+  out.fluxSwing = swing;
+  out.vOn = s.v.on;
+  out.vOff = s.v.off;
+  out.ipk = ipk;
+  out.ivalley = ivalley;
+  out.iavg = s.il;
+  out.negativeFraction = lambda0 < 0 ? Math.min(1, -lambda0 / swing) : 0;
+  out.beyondCurve = s.beyond;
+  out.unreachable = false;
+  return out;
 }
 
 /**
@@ -186,54 +218,53 @@ function continuous(p: OperatingPoint, curve: FluxCurve, c: { duty: number; il: 
  * so G(p) = Iout·Ts/(1/von + 1/|voff|); boost and inverting: Iout = D2·G(p)/p, so
  * G(p) = Iout·|voff|·Ts. With constant L these are the DCM relations of Erickson & Maksimović ch. 5.
  */
-function discontinuous(p: OperatingPoint, curve: FluxCurve, ilStart: number): WaveformSolution {
+function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
   const ts = 1 / p.fsw;
-  let il = ilStart;
-  let result: WaveformSolution | null = null;
+  let il = s.il;
   for (let iteration = 0; iteration < DUTY_ITERATIONS; iteration++) {
-    const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops);
-    if (!(v.on > 0) || !(v.off < 0)) return unreachable(0);
+    const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops, s.v);
+    if (!(v.on > 0) || !(v.off < 0)) return markUnreachable(out, 0);
     const target = p.topology === "buck" ? (p.iout * ts) / (1 / v.on - 1 / v.off) : p.iout * -v.off * ts;
-    const { peak, beyond } = peakFluxForIntegral(curve, target);
+    const peak = peakFluxForIntegral(curve, target, s);
     const duty = peak / (v.on * ts);
     const d2 = peak / (-v.off * ts);
-    const g = curve.currentIntegral(peak);
     const conducting = duty + d2;
-    const nextIl = (conducting * g) / peak;
-    result = {
-      mode: 1 - conducting <= BCM_TOLERANCE ? "bcm" : "dcm",
-      duty,
-      d2,
-      idle: Math.max(0, 1 - conducting),
-      lambdaValley: 0,
-      fluxSwing: peak,
-      vOn: v.on,
-      vOff: v.off,
-      ipk: curve.current(peak),
-      ivalley: 0,
-      iavg: nextIl,
-      meanSquare: (conducting * curve.squareIntegral(peak)) / peak,
-      negativeFraction: 0,
-      beyondCurve: beyond,
-      unreachable: false,
-    };
+    const nextIl = (conducting * curve.currentIntegral(peak)) / peak;
+    out.mode = 1 - conducting <= BCM_TOLERANCE ? "bcm" : "dcm";
+    out.duty = duty;
+    out.d2 = d2;
+    out.idle = Math.max(0, 1 - conducting);
+    out.lambdaValley = 0;
+    out.fluxSwing = peak;
+    out.vOn = v.on;
+    out.vOff = v.off;
+    out.ipk = curve.current(peak);
+    out.ivalley = 0;
+    out.iavg = nextIl;
+    out.meanSquare = (conducting * curve.squareIntegral(peak)) / peak;
+    out.negativeFraction = 0;
+    out.beyondCurve = s.beyond;
+    out.unreachable = false;
     const settled = Math.abs(nextIl - il) <= RELATIVE_TOLERANCE * Math.max(1, nextIl);
     il = nextIl;
     if (settled) break;
   }
-  return result ?? unreachable(0);
+  return out;
 }
 
-/** Steady-state inductor current for one operating point and one flux curve. */
-export function solveWaveform(p: OperatingPoint, curve: FluxCurve): WaveformSolution {
-  const c = continuousDuty(p);
-  if (c === null) return unreachable(1);
+/**
+ * Steady-state inductor current for one operating point and one flux curve, written into `out`
+ * (a fresh object when none is given) so that a hot loop can reuse one.
+ */
+export function solveWaveform(p: OperatingPoint, curve: FluxCurve, out: WaveformSolution = emptySolution()): WaveformSolution {
+  const s = scratch;
+  if (!continuousDuty(p, s)) return markUnreachable(out, 1);
   if (p.rectifier === "diode") {
     // The mean over a ramp rises with its starting flux, so the continuous valley would be
     // negative exactly when a ramp from λ = 0 already averages more than IL: then the diode
     // blocks and the current rests at zero.
-    const swing = (c.on * c.duty) / p.fsw;
-    if (curve.currentIntegral(swing) / swing > c.il) return discontinuous(p, curve, c.il);
+    const swing = (s.v.on * s.duty) / p.fsw;
+    if (curve.currentIntegral(swing) / swing > s.il) return discontinuous(p, curve, s, out);
   }
-  return continuous(p, curve, c);
+  return continuous(p, curve, s, out);
 }

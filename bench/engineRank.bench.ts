@@ -1,0 +1,96 @@
+import type { Part } from "../src/engine/types.ts";
+import { completePart } from "../src/engine/partDefaults.ts";
+import { makeSpec } from "../src/engine/specDefaults.ts";
+import { screenParts } from "../src/engine/screenParts.ts";
+import { cornerPoints } from "../src/engine/cornerPoints.ts";
+import { medianMs, random } from "./measure.ts";
+
+const spec = makeSpec({
+  topology: "buck",
+  vin: { min: 10.8, nom: 12, max: 13.2 },
+  vout: 3.3,
+  iout: { min: 0.2, max: 3 },
+  fsw: 500e3,
+  switchResistance: 0.03,
+  rectifierDrop: 0.4,
+  ambient: 40,
+});
+
+function generateParts(count: number, rollOff: boolean): Part[] {
+  const rnd = random(rollOff ? 7 : 11);
+  const parts: Part[] = [];
+  for (let i = 0; i < count; i++) {
+    const inductance = 0.33e-6 * Math.pow(300, rnd());
+    const size = 2 + 10 * rnd();
+    parts.push(
+      completePart({
+        partNumber: `BENCH-${i}`,
+        inductance,
+        tolerance: 0.2,
+        dcrTyp: 0.004 * (inductance / 1e-6) / size,
+        dcrMax: 0.005 * (inductance / 1e-6) / size,
+        isat: rollOff ? (size * 2) / Math.sqrt(inductance / 1e-6) : null,
+        irms: size / Math.sqrt(inductance / 1e-6),
+        srf: 200e6 / Math.sqrt(inductance / 1e-6),
+        length: size * 1e-3,
+        width: size * 1e-3,
+        height: size * 0.5e-3,
+        price: 0.05 + 0.05 * size,
+        saturation: rnd() < 0.5 ? "hard" : "soft",
+      }),
+    );
+  }
+  return parts;
+}
+
+/**
+ * The floor: closed-form CCM buck figures (ΔI, Ipk, Irms, DCR loss) in a bare typed-array loop
+ * over the same number of part-corners, no modes, roll-off or thermal solution.
+ */
+function floorLoop(inductance: Float64Array, dcr: Float64Array, out: Float64Array, vins: number[], loads: number[]): number {
+  const vo = spec.vout;
+  const fsw = spec.fsw;
+  let sum = 0;
+  for (let p = 0; p < inductance.length; p++) {
+    let worstLoss = 0;
+    for (const vin of vins) {
+      const d = vo / vin;
+      for (const iout of loads) {
+        for (const f of [0.8, 1, 1.2]) {
+          const ripple = ((vin - vo) * d) / (fsw * inductance[p]! * f);
+          const ipk = iout + ripple / 2;
+          const rms2 = iout * iout + (ripple * ripple) / 12;
+          const loss = rms2 * dcr[p]!;
+          if (loss > worstLoss) worstLoss = loss;
+          sum += ipk;
+        }
+      }
+    }
+    out[p] = worstLoss;
+  }
+  return sum;
+}
+
+export async function benchEngineRank(count = 100_000): Promise<string[]> {
+  const lines: string[] = [];
+  const cornersPerPart = cornerPoints(spec, completePart({ partNumber: "x", inductance: 1e-6, tolerance: 0.2 })).length;
+  const partCorners = count * cornersPerPart;
+  const constant = generateParts(count, false);
+  const rolled = generateParts(count, true);
+  const inductance = Float64Array.from(rolled, (p) => p.inductance);
+  const dcr = Float64Array.from(rolled, (p) => p.dcrMax ?? 0);
+  const out = new Float64Array(count);
+  const floor = await medianMs(() => floorLoop(inductance, dcr, out, [spec.vin.min, spec.vin.nom, spec.vin.max], [spec.iout.min, spec.iout.max]));
+  const constantMs = await medianMs(() => screenParts(spec, constant));
+  const rolledMs = await medianMs(() => screenParts(spec, rolled));
+  const ns = (ms: number) => ((ms * 1e6) / partCorners).toFixed(0);
+  lines.push(`engine ranking: ${count.toLocaleString("en")} parts × ${cornersPerPart} corners = ${partCorners.toLocaleString("en")} part-corners (median of 5)`);
+  lines.push(`  floor (closed-form buck, bare typed-array loop): ${floor.toFixed(1)} ms, ${ns(floor)} ns per part-corner`);
+  lines.push(
+    `  constant L:  ${constantMs.toFixed(0)} ms, ${ns(constantMs)} ns per part-corner, ${Math.round((count / constantMs) * 1000).toLocaleString("en")} parts/s, ${(constantMs / floor).toFixed(0)}× floor`,
+  );
+  lines.push(
+    `  roll-off:    ${rolledMs.toFixed(0)} ms, ${ns(rolledMs)} ns per part-corner, ${Math.round((count / rolledMs) * 1000).toLocaleString("en")} parts/s, ${(rolledMs / floor).toFixed(0)}× floor, ${(rolledMs / constantMs).toFixed(2)}× constant L`,
+  );
+  return lines;
+}

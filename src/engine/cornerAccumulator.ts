@@ -1,0 +1,162 @@
+import type { Mode, Spec, Worst, WorstCase } from "./types.ts";
+
+/** The waveform figures of a corner that the checks read (a CornerResult or a WaveformSolution). */
+export interface CornerWave {
+  mode: Mode;
+  ipk: number;
+  ivalley: number;
+  beyondCurve: boolean;
+  unreachable: boolean;
+}
+
+/** The loss and thermal figures of a corner (a CornerResult or a CornerSolver). */
+export interface CornerLosses {
+  irms: number;
+  ripple: number;
+  rippleRatio: number;
+  totalLoss: number;
+  dcrLoss: number;
+  coreLoss: number | null;
+  tempRise: number | null;
+  temperature: number;
+  isatAtTemp: number | null;
+}
+
+/**
+ * Worst cases and check inputs gathered corner by corner, so that a part can be judged without
+ * keeping its corners. Corners that cannot reach the output are counted apart and left out of
+ * every worst case.
+ */
+export class CornerAccumulator {
+  corners = 0;
+  firstUnreachable = -1;
+  ipk = -Infinity;
+  ipkAt = -1;
+  ivalley = Infinity;
+  ivalleyAt = -1;
+  irms = -Infinity;
+  irmsAt = -1;
+  ripple = -Infinity;
+  rippleAt = -1;
+  totalLoss = -Infinity;
+  totalLossAt = -1;
+  dcrLoss = -Infinity;
+  dcrLossAt = -1;
+  coreLoss = -Infinity;
+  coreLossAt = -1;
+  tempRise = -Infinity;
+  tempRiseAt = -1;
+  peak = -Infinity;
+  peakAt = -1;
+  /** Smallest Isat(T)/|i|max − 1 over corners (−1 for a corner past the curve). */
+  saturationMargin = Infinity;
+  saturationAt = -1;
+  saturationPeak = 0;
+  saturationIsat: number | null = null;
+  saturationTemperature = 0;
+  saturationBeyond = false;
+  /** Ripple ratio over the corners at nominal input and full load. */
+  windowCorners = 0;
+  windowMin = Infinity;
+  windowMax = -Infinity;
+  windowFirst = -1;
+  windowOutsideAt = -1;
+  windowOutsideRatio = 0;
+  /** First corner at minimum load that is not in CCM. */
+  lightLoadAt = -1;
+  lightLoadMode: Mode = "ccm";
+
+  constructor(
+    private readonly spec: Spec,
+    private readonly isat: number | null,
+  ) {}
+
+  add(wave: CornerWave, losses: CornerLosses, vin: number, iout: number, index: number): void {
+    this.corners++;
+    if (wave.unreachable) {
+      if (this.firstUnreachable < 0) this.firstUnreachable = index;
+      return;
+    }
+    const peak = wave.ipk > -wave.ivalley ? wave.ipk : -wave.ivalley;
+    if (wave.ipk > this.ipk) {
+      this.ipk = wave.ipk;
+      this.ipkAt = index;
+    }
+    if (wave.ivalley < this.ivalley) {
+      this.ivalley = wave.ivalley;
+      this.ivalleyAt = index;
+    }
+    if (losses.irms > this.irms) {
+      this.irms = losses.irms;
+      this.irmsAt = index;
+    }
+    if (losses.ripple > this.ripple) {
+      this.ripple = losses.ripple;
+      this.rippleAt = index;
+    }
+    if (losses.totalLoss > this.totalLoss) {
+      this.totalLoss = losses.totalLoss;
+      this.totalLossAt = index;
+    }
+    if (losses.dcrLoss > this.dcrLoss) {
+      this.dcrLoss = losses.dcrLoss;
+      this.dcrLossAt = index;
+    }
+    if (losses.coreLoss !== null && losses.coreLoss > this.coreLoss) {
+      this.coreLoss = losses.coreLoss;
+      this.coreLossAt = index;
+    }
+    if (losses.tempRise !== null && losses.tempRise > this.tempRise) {
+      this.tempRise = losses.tempRise;
+      this.tempRiseAt = index;
+    }
+    if (peak > this.peak) {
+      this.peak = peak;
+      this.peakAt = index;
+    }
+    if (this.isat !== null) {
+      const isat = losses.isatAtTemp ?? this.isat;
+      const margin = wave.beyondCurve ? -1 : isat / peak - 1;
+      if (margin < this.saturationMargin) {
+        this.saturationMargin = margin;
+        this.saturationAt = index;
+        this.saturationPeak = peak;
+        this.saturationIsat = losses.isatAtTemp;
+        this.saturationTemperature = losses.temperature;
+        this.saturationBeyond = wave.beyondCurve;
+      }
+    }
+    const t = this.spec.targets;
+    if (vin === this.spec.vin.nom && iout === this.spec.iout.max) {
+      const r = losses.rippleRatio;
+      if (this.windowCorners === 0) this.windowFirst = index;
+      this.windowCorners++;
+      if (r < this.windowMin) this.windowMin = r;
+      if (r > this.windowMax) this.windowMax = r;
+      if (this.windowOutsideAt < 0 && (r < t.rippleRatio.min || r > t.rippleRatio.max)) {
+        this.windowOutsideAt = index;
+        this.windowOutsideRatio = r;
+      }
+    }
+    if (iout === this.spec.iout.min && this.lightLoadAt < 0 && wave.mode !== "ccm") {
+      this.lightLoadAt = index;
+      this.lightLoadMode = wave.mode;
+    }
+  }
+
+  /** Worst value of each figure with the corner that produced it (NaN and −1 when no corner was reachable). */
+  worst(): Worst {
+    const w = (value: number, at: number): WorstCase => (at < 0 ? { value: NaN, cornerIndex: -1 } : { value, cornerIndex: at });
+    return {
+      ipk: w(this.ipk, this.ipkAt),
+      ivalley: w(this.ivalley, this.ivalleyAt),
+      irms: w(this.irms, this.irmsAt),
+      ripple: w(this.ripple, this.rippleAt),
+      totalLoss: w(this.totalLoss, this.totalLossAt),
+      dcrLoss: w(this.dcrLoss, this.dcrLossAt),
+      coreLoss: this.coreLossAt < 0 ? null : { value: this.coreLoss, cornerIndex: this.coreLossAt },
+      tempRise: this.tempRiseAt < 0 ? null : { value: this.tempRise, cornerIndex: this.tempRiseAt },
+      peakMagnitude: w(this.peak, this.peakAt),
+    };
+  }
+}
