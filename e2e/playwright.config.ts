@@ -1,7 +1,9 @@
 import { defineConfig } from "@playwright/test";
 import { CHROMIUM_FLAGS, findChromium } from "./findChromium.ts";
 
-const PORT = 4179;
+// Overridable so that two checkouts (or two people) can run the suite side by side.
+const PORT = Number(process.env.E2E_PORT ?? 4179);
+const OUT_DIR = process.env.E2E_OUTDIR ?? "dist";
 
 export default defineConfig({
   testDir: ".",
@@ -17,7 +19,7 @@ export default defineConfig({
     launchOptions: { executablePath: findChromium(), args: CHROMIUM_FLAGS },
   },
   webServer: {
-    command: `npx vite preview --host 127.0.0.1 --port ${PORT} --strictPort`,
+    command: `npx vite preview --host 127.0.0.1 --port ${PORT} --strictPort --outDir ${OUT_DIR}`,
     url: `http://127.0.0.1:${PORT}`,
     cwd: "..",
     reuseExistingServer: false,
