@@ -1,11 +1,12 @@
 import type { Part } from "../src/engine/types.ts";
 import { completePart } from "../src/engine/partDefaults.ts";
 import { makeSpec } from "../src/engine/specDefaults.ts";
-import { screenParts } from "../src/engine/screenParts.ts";
+import { joinFigures, rankFigures, screenParts, type PartFigures } from "../src/engine/screenParts.ts";
+import { Worker } from "node:worker_threads";
 import { cornerPoints } from "../src/engine/cornerPoints.ts";
 import { medianMs, random } from "./measure.ts";
 
-const spec = makeSpec({
+export const benchSpec = makeSpec({
   topology: "buck",
   vin: { min: 10.8, nom: 12, max: 13.2 },
   vout: 3.3,
@@ -16,7 +17,7 @@ const spec = makeSpec({
   ambient: 40,
 });
 
-function generateParts(count: number, rollOff: boolean): Part[] {
+export function generateParts(count: number, rollOff: boolean): Part[] {
   const rnd = random(rollOff ? 7 : 11);
   const parts: Part[] = [];
   for (let i = 0; i < count; i++) {
@@ -48,8 +49,8 @@ function generateParts(count: number, rollOff: boolean): Part[] {
  * over the same number of part-corners, no modes, roll-off or thermal solution.
  */
 function floorLoop(inductance: Float64Array, dcr: Float64Array, out: Float64Array, vins: number[], loads: number[]): number {
-  const vo = spec.vout;
-  const fsw = spec.fsw;
+  const vo = benchSpec.vout;
+  const fsw = benchSpec.fsw;
   let sum = 0;
   for (let p = 0; p < inductance.length; p++) {
     let worstLoss = 0;
@@ -73,16 +74,17 @@ function floorLoop(inductance: Float64Array, dcr: Float64Array, out: Float64Arra
 
 export async function benchEngineRank(count = 100_000): Promise<string[]> {
   const lines: string[] = [];
-  const cornersPerPart = cornerPoints(spec, completePart({ partNumber: "x", inductance: 1e-6, tolerance: 0.2 })).length;
+  const cornersPerPart = cornerPoints(benchSpec, completePart({ partNumber: "x", inductance: 1e-6, tolerance: 0.2 })).length;
   const partCorners = count * cornersPerPart;
   const constant = generateParts(count, false);
   const rolled = generateParts(count, true);
   const inductance = Float64Array.from(rolled, (p) => p.inductance);
   const dcr = Float64Array.from(rolled, (p) => p.dcrMax ?? 0);
   const out = new Float64Array(count);
-  const floor = await medianMs(() => floorLoop(inductance, dcr, out, [spec.vin.min, spec.vin.nom, spec.vin.max], [spec.iout.min, spec.iout.max]));
-  const constantMs = await medianMs(() => screenParts(spec, constant));
-  const rolledMs = await medianMs(() => screenParts(spec, rolled));
+  const floor = await medianMs(() => floorLoop(inductance, dcr, out, [benchSpec.vin.min, benchSpec.vin.nom, benchSpec.vin.max], [benchSpec.iout.min, benchSpec.iout.max]));
+  const constantMs = await medianMs(() => screenParts(benchSpec, constant));
+  const rolledMs = await medianMs(() => screenParts(benchSpec, rolled));
+  const parallelMs = await twoWorkers(count, rolled);
   const ns = (ms: number) => ((ms * 1e6) / partCorners).toFixed(0);
   lines.push(`engine ranking: ${count.toLocaleString("en")} parts × ${cornersPerPart} corners = ${partCorners.toLocaleString("en")} part-corners (median of 5)`);
   lines.push(`  floor (closed-form buck, bare typed-array loop): ${floor.toFixed(1)} ms, ${ns(floor)} ns per part-corner`);
@@ -92,5 +94,47 @@ export async function benchEngineRank(count = 100_000): Promise<string[]> {
   lines.push(
     `  roll-off:    ${rolledMs.toFixed(0)} ms, ${ns(rolledMs)} ns per part-corner, ${Math.round((count / rolledMs) * 1000).toLocaleString("en")} parts/s, ${(rolledMs / floor).toFixed(0)}× floor, ${(rolledMs / constantMs).toFixed(2)}× constant L`,
   );
+  lines.push(
+    `  roll-off, 2 worker threads: ${parallelMs.toFixed(0)} ms (slices screened in parallel, then scored and ranked together), ${Math.round((count / parallelMs) * 1000).toLocaleString("en")} parts/s`,
+  );
   return lines;
+}
+
+/**
+ * Wall time of the ranking on both cores: each worker holds the list (as the browser's workers
+ * do after an import) and screens half of it; the main thread joins, scores and sorts.
+ */
+async function twoWorkers(count: number, parts: Part[]): Promise<number> {
+  const entry = new URL("./screenSliceWorker.ts", import.meta.url).href;
+  const bootstrap = new URL("./tsWorker.mjs", import.meta.url);
+  const half = Math.floor(count / 2);
+  const ranges = [
+    [0, half],
+    [half, count],
+  ] as const;
+  const workers = ranges.map(() => new Worker(bootstrap, { workerData: { count, entry } }));
+  await Promise.all(workers.map((w) => new Promise((resolve) => w.once("message", resolve))));
+  const once = async () => {
+    const start = performance.now();
+    const slices = await Promise.all(
+      workers.map(
+        (w, k) =>
+          new Promise<PartFigures>((resolve) => {
+            w.once("message", (figures: PartFigures) => resolve(figures));
+            w.postMessage({ from: ranges[k]![0], to: ranges[k]![1] });
+          }),
+      ),
+    );
+    rankFigures(benchSpec, parts, joinFigures(slices));
+    return performance.now() - start;
+  };
+  await once();
+  const times: number[] = [];
+  for (let r = 0; r < 5; r++) {
+    await new Promise((resolve) => setTimeout(resolve, 400));
+    times.push(await once());
+  }
+  await Promise.all(workers.map((w) => w.terminate()));
+  times.sort((a, b) => a - b);
+  return times[2]!;
 }

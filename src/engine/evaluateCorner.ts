@@ -85,7 +85,6 @@ export class CornerSolver {
   coreLoss: number | null = null;
   totalLoss = 0;
   isatAtTemp: number | null = null;
-  inductanceAtPeak = 0;
   irms = 0;
   ripple = 0;
   rippleRatio = 0;
@@ -94,11 +93,11 @@ export class CornerSolver {
   private readonly rollOffCurve = new RollOffCurve(1, 1, 2);
   private readonly op: OperatingPoint;
   private readonly balance: ThermalBalance;
-  // The last corner's load and temperature: the next corner of the same part at the same load
-  // (another inductance corner) starts its thermal solution there.
+  // Warm start: the temperature of this part's last corner at each of the two most recent loads;
+  // the next corner at the same load starts its thermal solution there.
   private guessPart: Part | null = null;
-  private guessIout = NaN;
-  private guessTemperature = 0;
+  private readonly guessIout = [NaN, NaN];
+  private readonly guessTemperature = [0, 0];
 
   constructor(private readonly spec: Spec) {
     this.curve = this.constantCurve;
@@ -153,8 +152,9 @@ export class CornerSolver {
     balance.otherLoss = 0;
     balance.start = spec.ambient;
     let temperature = spec.ambient;
-    if (thermal && part === this.guessPart && iout === this.guessIout) {
-      temperature = this.guessTemperature;
+    const slot = iout === this.guessIout[0] ? 0 : iout === this.guessIout[1] ? 1 : -1;
+    if (thermal && part === this.guessPart && slot >= 0) {
+      temperature = this.guessTemperature[slot]!;
     } else if (thermal) {
       // Start from the rise that the DC part of the inductor current alone would cause.
       const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
@@ -191,9 +191,11 @@ export class CornerSolver {
       core = coreLossOf(part, solution, spec.fsw);
     }
     const ripple = solution.ipk - solution.ivalley;
+    if (part !== this.guessPart) this.startPart();
     this.guessPart = part;
-    this.guessIout = iout;
-    this.guessTemperature = temperature;
+    const keep = slot >= 0 ? slot : Number.isNaN(this.guessIout[0]!) ? 0 : 1;
+    this.guessIout[keep] = iout;
+    this.guessTemperature[keep] = temperature;
     this.temperature = temperature;
     this.tempRise = thermal && !solution.unreachable ? temperature - spec.ambient : null;
     this.dcrHot = dcrHot;
@@ -205,12 +207,13 @@ export class CornerSolver {
     this.irms = Math.sqrt(solution.meanSquare);
     this.ripple = ripple;
     this.rippleRatio = solution.iavg !== 0 ? ripple / Math.abs(solution.iavg) : Infinity;
-    this.inductanceAtPeak = this.curve.inductanceAt(solution.ipk > -solution.ivalley ? solution.ipk : -solution.ivalley);
   }
 
   /** Forgets the warm start, so that a part's corners come out the same whichever part came before. */
   startPart(): void {
     this.guessPart = null;
+    this.guessIout[0] = NaN;
+    this.guessIout[1] = NaN;
   }
 
   /** The last solve as a plain CornerResult. */
@@ -236,7 +239,8 @@ export class CornerSolver {
       ripple: this.ripple,
       rippleRatio: this.rippleRatio,
       fluxSwing: s.fluxSwing,
-      inductanceAtPeak: this.inductanceAtPeak,
+      // Only the detail view needs it, so it is worked out here rather than in every solve.
+      inductanceAtPeak: this.curve.inductanceAt(s.ipk > -s.ivalley ? s.ipk : -s.ivalley),
       dcrLoss: this.dcrLoss,
       acLoss: this.acLoss,
       coreLoss: this.coreLoss,

@@ -74,9 +74,17 @@ interface RollOffTable {
   /** bucket[b] = last node with y ≤ b·yMax/buckets, to start the interval search. */
   bucket: Int32Array;
   bucketScale: number;
+  /**
+   * The same law on a uniform grid in y over [0, uniformMax], where the slope dx/dy stays below
+   * UNIFORM_SLOPE_LIMIT: a lookup there is one index computation instead of a search.
+   */
+  uniform: { x: Float64Array; slope: Float64Array; g: Float64Array; h: Float64Array; step: number; inverseStep: number; yLimit: number };
 }
 
 const TABLE_NODES = 4097;
+const UNIFORM_NODES = 4097;
+/** Up to where dx/dy = 1 + x^n reaches this, the uniform grid's cubic Hermite stays accurate to ~1e-7. */
+const UNIFORM_SLOPE_LIMIT = 64;
 const BUCKETS = 2048;
 /** Tabulate until L has fallen to a millionth of L0 (or x = 30): beyond that no real part is usable. */
 const SMALLEST_INDUCTANCE_RATIO = 1e-6;
@@ -123,7 +131,48 @@ function buildTable(n: number): RollOffTable {
     while (k < nodes - 2 && y[k + 1]! <= yb) k++;
     bucket[b] = k;
   }
-  return { n, step, nodes, x, y, slope, g, h, yMax, xMax, bucket, bucketScale: BUCKETS / yMax };
+  const base = { n, step, nodes, x, y, slope, g, h, yMax, xMax, bucket, bucketScale: BUCKETS / yMax };
+  return { ...base, uniform: buildUniformGrid(base) };
+}
+
+/** ∫ from a to b of s^p/(1 + s^n) ds by 5-point Gauss–Legendre (b − a at most one table step). */
+function segmentIntegral(a: number, b: number, n: number, p: number): number {
+  const mid = (a + b) / 2;
+  const half = (b - a) / 2;
+  let sum = 0;
+  for (let q = 0; q < GL_NODES.length; q++) {
+    const s = mid + half * GL_NODES[q]!;
+    sum += (GL_WEIGHTS[q]! * Math.pow(s, p)) / (1 + Math.pow(s, n));
+  }
+  return sum * half;
+}
+
+function buildUniformGrid(t: Omit<RollOffTable, "uniform">): RollOffTable["uniform"] {
+  const xLimit = Math.min(t.xMax, Math.pow(UNIFORM_SLOPE_LIMIT - 1, 1 / t.n));
+  // y at xLimit, from the node below it.
+  const kLimit = Math.min(t.nodes - 2, Math.floor(xLimit / t.step));
+  const yLimit = t.y[kLimit]! + segmentIntegral(t.x[kLimit]!, xLimit, t.n, 0);
+  const step = yLimit / (UNIFORM_NODES - 1);
+  const x = new Float64Array(UNIFORM_NODES);
+  const slope = new Float64Array(UNIFORM_NODES);
+  const g = new Float64Array(UNIFORM_NODES);
+  const h = new Float64Array(UNIFORM_NODES);
+  let k = 0;
+  for (let j = 0; j < UNIFORM_NODES; j++) {
+    const yj = j * step;
+    while (k < t.nodes - 2 && t.y[k + 1]! <= yj) k++;
+    // Newton on y(x) = y_k + ∫ ds/(1 + s^n) from the node below, with dy/dx = 1/(1 + x^n).
+    let xj = t.x[k]! + (yj - t.y[k]!) * t.slope[k]!;
+    for (let iteration = 0; iteration < 6; iteration++) {
+      const residual = t.y[k]! + segmentIntegral(t.x[k]!, xj, t.n, 0) - yj;
+      xj -= residual * (1 + Math.pow(xj, t.n));
+    }
+    x[j] = xj;
+    slope[j] = 1 + Math.pow(xj, t.n);
+    g[j] = t.g[k]! + segmentIntegral(t.x[k]!, xj, t.n, 1);
+    h[j] = t.h[k]! + segmentIntegral(t.x[k]!, xj, t.n, 2);
+  }
+  return { x, slope, g, h, step, inverseStep: 1 / step, yLimit };
 }
 
 const tableCache = new Map<number, RollOffTable>();
@@ -171,9 +220,18 @@ export class RollOffCurve implements FluxCurve {
   private lastK = 0;
   private lastT = 0;
   private lastHy = 0;
+  // Arrays of the grid the last lookup used (uniform or searched).
+  private gridX: Float64Array;
+  private gridSlope: Float64Array;
+  private gridG: Float64Array;
+  private gridH: Float64Array;
 
   constructor(inductance: number, ik: number, n: number) {
     this.table = rollOffTable(n);
+    this.gridX = this.table.x;
+    this.gridSlope = this.table.slope;
+    this.gridG = this.table.g;
+    this.gridH = this.table.h;
     this.set(inductance, ik, n);
   }
 
@@ -195,6 +253,24 @@ export class RollOffCurve implements FluxCurve {
   private locate(yAbs: number): void {
     if (yAbs === this.lastY) return;
     const t = this.table;
+    const u = t.uniform;
+    if (yAbs < u.yLimit) {
+      const position = yAbs * u.inverseStep;
+      const k = Math.floor(position);
+      this.lastY = yAbs;
+      this.lastK = k;
+      this.lastHy = u.step;
+      this.lastT = position - k;
+      this.gridX = u.x;
+      this.gridSlope = u.slope;
+      this.gridG = u.g;
+      this.gridH = u.h;
+      return;
+    }
+    this.gridX = t.x;
+    this.gridSlope = t.slope;
+    this.gridG = t.g;
+    this.gridH = t.h;
     const yc = yAbs >= t.yMax ? t.yMax : yAbs;
     const b = Math.floor(yc * t.bucketScale);
     let lo = t.bucket[b >= BUCKETS ? BUCKETS : b]!;
@@ -225,9 +301,10 @@ export class RollOffCurve implements FluxCurve {
 
   private xAt(yAbs: number): number {
     this.locate(yAbs);
-    const t = this.table;
     const k = this.lastK;
-    return this.hermite(t.x[k]!, t.x[k + 1]!, t.slope[k]!, t.slope[k + 1]!);
+    const x = this.gridX;
+    const slope = this.gridSlope;
+    return this.hermite(x[k]!, x[k + 1]!, slope[k]!, slope[k + 1]!);
   }
 
   current(lambda: number): number {
@@ -240,22 +317,23 @@ export class RollOffCurve implements FluxCurve {
     const y = lambda * this.inverseLambdaScale;
     const ya = y < 0 ? -y : y;
     this.locate(ya);
-    const t = this.table;
     const k = this.lastK;
+    const g = this.gridG;
+    const x = this.gridX;
     // g' = x; g is even in y.
-    return this.hermite(t.g[k]!, t.g[k + 1]!, t.x[k]!, t.x[k + 1]!) * this.gScale;
+    return this.hermite(g[k]!, g[k + 1]!, x[k]!, x[k + 1]!) * this.gScale;
   }
 
   squareIntegral(lambda: number): number {
     const y = lambda * this.inverseLambdaScale;
     const ya = y < 0 ? -y : y;
     this.locate(ya);
-    const t = this.table;
     const k = this.lastK;
-    const x0 = t.x[k]!;
-    const x1 = t.x[k + 1]!;
+    const x0 = this.gridX[k]!;
+    const x1 = this.gridX[k + 1]!;
+    const h = this.gridH;
     // h' = x²; h is odd in y.
-    const v = this.hermite(t.h[k]!, t.h[k + 1]!, x0 * x0, x1 * x1) * this.hScale;
+    const v = this.hermite(h[k]!, h[k + 1]!, x0 * x0, x1 * x1) * this.hScale;
     return y < 0 ? -v : v;
   }
 

@@ -13,24 +13,12 @@ import { rankOrder } from "./rankOrder.ts";
  * plus the rank order. Built for large lists: it keeps no corners and writes no reasons;
  * evaluatePart gives the full story of any one part, with the same numbers.
  */
-export interface Screening {
+export interface Screening extends PartFigures {
   count: number;
-  status: ResultStatus[];
-  /** Number of failed checks. */
-  failures: Uint8Array;
   score: Float64Array;
   pareto: Uint8Array;
   /** order[k] = index of the part ranked k + 1. */
   order: Int32Array;
-  /** Worst-case figures (NaN where no corner was reachable; tempRise NaN when not modelled). */
-  peak: Float64Array;
-  irms: Float64Array;
-  totalLoss: Float64Array;
-  tempRise: Float64Array;
-  /** Smallest current margin (saturation or heating), NaN when unknown. */
-  minMargin: Float64Array;
-  /** 1 when some corner cannot reach the output. */
-  unreachable: Uint8Array;
 }
 
 export interface ScreenOptions {
@@ -43,9 +31,28 @@ function volume(part: Part): number | null {
   return part.length !== null && part.width !== null && part.height !== null ? part.length * part.width * part.height : null;
 }
 
-/** Evaluates every part at every corner (same order as cornerPoints) and ranks them. */
-export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenOptions = {}): Screening {
-  const n = parts.length;
+/** Per-part verdicts and worst-case figures of a slice of the list, before scoring and ranking. */
+export interface PartFigures {
+  status: ResultStatus[];
+  /** Number of failed checks. */
+  failures: Uint8Array;
+  /** Worst-case figures (NaN where no corner was reachable; tempRise NaN when not modelled). */
+  peak: Float64Array;
+  irms: Float64Array;
+  totalLoss: Float64Array;
+  tempRise: Float64Array;
+  /** Smallest current margin (saturation or heating), NaN when unknown. */
+  minMargin: Float64Array;
+  /** 1 when some corner cannot reach the output. */
+  unreachable: Uint8Array;
+}
+
+/**
+ * Evaluates parts[from, to) at every corner (same order as cornerPoints). Slices can be
+ * computed apart (in several workers) and joined with joinFigures before rankFigures.
+ */
+export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to = parts.length, options: ScreenOptions = {}): PartFigures {
+  const n = Math.max(0, Math.min(to, parts.length) - from);
   const status: ResultStatus[] = new Array<ResultStatus>(n);
   const failures = new Uint8Array(n);
   const peak = new Float64Array(n);
@@ -59,7 +66,7 @@ export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenO
   const loads = spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max];
   const every = options.progressEvery ?? 1000;
   for (let p = 0; p < n; p++) {
-    const part = parts[p]!;
+    const part = parts[from + p]!;
     const prepared = preparePart(part);
     const tolerance = effectiveTolerance(spec, part);
     const factors = tolerance > 0 ? [1 - tolerance, 1, 1 + tolerance] : [1];
@@ -75,8 +82,7 @@ export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenO
       }
     }
     const checks = partChecks(spec, part, acc, null);
-    const s = statusOf(checks);
-    status[p] = s;
+    status[p] = statusOf(checks);
     let failed = 0;
     for (const c of checks) if (c.status === "fail") failed++;
     failures[p] = failed;
@@ -88,6 +94,35 @@ export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenO
     unreachable[p] = acc.firstUnreachable >= 0 ? 1 : 0;
     if (options.onProgress !== undefined && (p + 1) % every === 0) options.onProgress(p + 1, n);
   }
+  return { status, failures, peak, irms, totalLoss, tempRise, minMargin, unreachable };
+}
+
+/** Joins slices computed in list order. */
+export function joinFigures(slices: readonly PartFigures[]): PartFigures {
+  const cat = <T extends Float64Array | Uint8Array>(pick: (f: PartFigures) => T, make: (n: number) => T): T => {
+    const out = make(slices.reduce((n, f) => n + pick(f).length, 0));
+    let at = 0;
+    for (const f of slices) {
+      out.set(pick(f), at);
+      at += pick(f).length;
+    }
+    return out;
+  };
+  return {
+    status: slices.flatMap((f) => f.status),
+    failures: cat((f) => f.failures, (n) => new Uint8Array(n)),
+    peak: cat((f) => f.peak, (n) => new Float64Array(n)),
+    irms: cat((f) => f.irms, (n) => new Float64Array(n)),
+    totalLoss: cat((f) => f.totalLoss, (n) => new Float64Array(n)),
+    tempRise: cat((f) => f.tempRise, (n) => new Float64Array(n)),
+    minMargin: cat((f) => f.minMargin, (n) => new Float64Array(n)),
+    unreachable: cat((f) => f.unreachable, (n) => new Uint8Array(n)),
+  };
+}
+
+/** Scores, Pareto flags and rank order of a whole list from its figures. */
+export function rankFigures(spec: Spec, parts: readonly Part[], figures: PartFigures): Screening {
+  const { status, totalLoss, minMargin, unreachable, failures } = figures;
   const anyPass = status.some((s) => s === "pass");
   const reference = status.map((s) => (anyPass ? s === "pass" : true));
   const known = (x: number) => (Number.isFinite(x) ? x : null);
@@ -111,6 +146,12 @@ export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenO
     parts.map((part, i) => (status[i] !== "fail" ? volume(part) : null)),
   );
   const order = rankOrder(status, score, failures);
-  options.onProgress?.(n, n);
-  return { count: n, status, failures, score, pareto: Uint8Array.from(front, (f) => (f ? 1 : 0)), order, peak, irms, totalLoss, tempRise, minMargin, unreachable };
+  return { count: parts.length, ...figures, score, pareto: Uint8Array.from(front, (f) => (f ? 1 : 0)), order };
+}
+
+/** Evaluates every part at every corner and ranks them. */
+export function screenParts(spec: Spec, parts: readonly Part[], options: ScreenOptions = {}): Screening {
+  const figures = screenFigures(spec, parts, 0, parts.length, options);
+  options.onProgress?.(parts.length, parts.length);
+  return rankFigures(spec, parts, figures);
 }

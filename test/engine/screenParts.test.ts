@@ -1,0 +1,42 @@
+import { describe, expect, it } from "vitest";
+import { readFileSync } from "node:fs";
+import { importPartList } from "../../src/catalog/importPartList.ts";
+import { parseSpec } from "../../src/engine/parseSpec.ts";
+import { joinFigures, rankFigures, screenFigures, screenParts } from "../../src/engine/screenParts.ts";
+import { evaluatePart } from "../../src/engine/evaluatePart.ts";
+import { rankedResults } from "../../src/engine/rankParts.ts";
+import type { Spec } from "../../src/engine/types.ts";
+
+const parsed = parseSpec(JSON.parse(readFileSync("sample-parts/demo-spec.json", "utf8")));
+const spec = (parsed as { ok: true; spec: Spec }).spec;
+const parts = importPartList(readFileSync("sample-parts/demo-parts.csv", "utf8")).parts;
+
+describe("screenParts", () => {
+  it("screenParts agrees with evaluatePart on every part's status and worst figures (one code path)", () => {
+    const s = screenParts(spec, parts);
+    parts.forEach((part, i) => {
+      const e = evaluatePart(spec, part);
+      expect(s.status[i]).toBe(e.status);
+      expect(s.failures[i]).toBe(e.failures.length);
+      if (e.worst.totalLoss.cornerIndex >= 0) expect(s.totalLoss[i]).toBe(e.worst.totalLoss.value);
+      expect(s.peak[i]).toBe(e.worst.peakMagnitude.value);
+      expect(Number.isNaN(s.minMargin[i]!) ? null : s.minMargin[i]).toBe(e.minMargin);
+    });
+  });
+
+  it("screenFigures over slices joined gives the same ranking as one pass", () => {
+    const whole = screenParts(spec, parts);
+    const cut = Math.floor(parts.length / 3);
+    const joined = rankFigures(spec, parts, joinFigures([screenFigures(spec, parts, 0, cut), screenFigures(spec, parts, cut, parts.length)]));
+    expect(Array.from(joined.order)).toEqual(Array.from(whole.order));
+    expect(Array.from(joined.score)).toEqual(Array.from(whole.score));
+  });
+
+  it("rankedResults materialises the requested ranks with reasons, in order", () => {
+    const s = screenParts(spec, parts);
+    const page = rankedResults(spec, parts, s, 10, 15);
+    expect(page.map((r) => r.rank)).toEqual([11, 12, 13, 14, 15]);
+    expect(page.map((r) => r.partNumber)).toEqual(Array.from(s.order.slice(10, 15), (i) => parts[i]!.partNumber));
+    expect(page.find((r) => !r.pass)?.failures[0]).toMatch(/at Vin/);
+  });
+});
