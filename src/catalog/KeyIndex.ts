@@ -1,0 +1,80 @@
+/**
+ * Case-insensitive string → number index for part numbers. An open-addressing table over an
+ * Int32Array instead of a Map: on 100 000 fresh strings a Map's hashing and growth cost as much
+ * as converting the rows, and this keeps no per-entry objects for the collector. ASCII letters
+ * fold in place; keys with other characters are folded once with toUpperCase.
+ */
+export class KeyIndex {
+  private slots = new Int32Array(1024);
+  private mask = 1023;
+  private readonly keys: string[] = [];
+  private readonly hashes: number[] = [];
+  private readonly values: number[] = [];
+
+  get size(): number {
+    return this.keys.length;
+  }
+
+  get(key: string): number | undefined {
+    const k = fold(key);
+    const h = hash(k);
+    for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
+      const e = this.slots[s] as number;
+      if (e === 0) return undefined;
+      if (this.hashes[e - 1] === h && sameFolded(this.keys[e - 1] as string, k)) return this.values[e - 1];
+    }
+  }
+
+  set(key: string, value: number): void {
+    const k = fold(key);
+    const h = hash(k);
+    for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
+      const e = this.slots[s] as number;
+      if (e === 0) {
+        this.keys.push(k);
+        this.hashes.push(h);
+        this.values.push(value);
+        this.slots[s] = this.keys.length;
+        if (this.keys.length * 2 > this.mask) this.grow();
+        return;
+      }
+      if (this.hashes[e - 1] === h && sameFolded(this.keys[e - 1] as string, k)) {
+        this.values[e - 1] = value;
+        return;
+      }
+    }
+  }
+
+  private grow(): void {
+    const size = (this.mask + 1) * 4;
+    this.slots = new Int32Array(size);
+    this.mask = size - 1;
+    for (let e = 0; e < this.keys.length; e++) {
+      let s = (this.hashes[e] as number) & this.mask;
+      while (this.slots[s] !== 0) s = (s + 1) & this.mask;
+      this.slots[s] = e + 1;
+    }
+  }
+}
+
+function fold(key: string): string {
+  for (let i = 0; i < key.length; i++) if (key.charCodeAt(i) > 127) return key.toUpperCase();
+  return key;
+}
+
+function upper(c: number): number {
+  return c >= 97 && c <= 122 ? c - 32 : c;
+}
+
+/** FNV-1a over upper-cased ASCII. */
+function hash(key: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < key.length; i++) h = Math.imul(h ^ upper(key.charCodeAt(i)), 0x01000193);
+  return h >>> 0;
+}
+
+function sameFolded(a: string, b: string): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (upper(a.charCodeAt(i)) !== upper(b.charCodeAt(i))) return false;
+  return true;
+}

@@ -1,0 +1,10 @@
+export { importPartList } from "./importPartList.ts";
+export { importPartListBytes } from "./importPartListBytes.ts";
+export { decodeText } from "./decodeText.ts";
+export { mergeLists, type MergeDuplicate, type MergedLists } from "./mergeLists.ts";
+export { parseMappingOverride } from "./parseMappingOverride.ts";
+export { parseUnit } from "./parseUnit.ts";
+export { parseNumberCell } from "./parseNumberCell.ts";
+export { recogniseHeader } from "./recogniseHeader.ts";
+export { QUANTITIES, QUANTITY_KEYS } from "./quantities.ts";
+export type * from "./types.ts";
