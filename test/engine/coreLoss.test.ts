@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { cosinePowerIntegral, gamma, igseCoefficient, igseTwoRamp, steinmetz } from "../../src/engine/coreLoss.ts";
+import { solve } from "./helpers.ts";
 
 const k = 1.5;
 const alpha = 1.4;
@@ -77,5 +78,28 @@ describe("iGSE", () => {
       return x < 0.2 ? x / 0.2 : x < 0.5 ? 1 - (x - 0.2) / 0.3 : 0;
     };
     expect(igseByIntegration((t) => 0.15 * waveform(t), period, 100000) / igseTwoRamp(k, alpha, beta, f, 0.15, 0.2, 0.3)).toBeCloseTo(1, 5);
+  });
+});
+
+describe("core loss in a corner", () => {
+  const base = { topology: "buck" as const, vin: 12, vout: 3.3, fsw: 500e3 };
+  const coreLoss = { k: 1.5, alpha: 1.4, beta: 2.5, bPerAmp: 0.05, volume: 2e-7 };
+
+  it("evaluateCorner uses the iGSE with ΔB = Δλ·(B per amp)/L0 over the on and rectifier ramps (CCM)", () => {
+    const c = solve({ ...base, iout: 2 }, { inductance: 4.7e-6, coreLoss });
+    // Constant L: Δλ = L·ΔI, so ΔB = ΔI·(B per amp) (McLyman, ΔB = L·ΔI/(N·Ae), from memory).
+    const swing = c.ripple * 0.05;
+    expect(c.coreLoss!).toBeCloseTo(igseTwoRamp(1.5, 1.4, 2.5, 500e3, swing, c.duty, 1 - c.duty) * 2e-7, 12);
+    expect(c.totalLoss).toBeCloseTo(c.dcrLoss + c.acLoss + c.coreLoss!, 15);
+  });
+
+  it("evaluateCorner in DCM counts the two ramps and nothing for the idle interval", () => {
+    const c = solve({ ...base, iout: 0.1 }, { inductance: 4.7e-6, coreLoss });
+    expect(c.mode).toBe("dcm");
+    expect(c.coreLoss!).toBeCloseTo(igseTwoRamp(1.5, 1.4, 2.5, 500e3, c.ipk * 0.05, c.duty, c.d2) * 2e-7, 12);
+  });
+
+  it("evaluateCorner reports core loss as null (not modelled) when the part has no core-loss data", () => {
+    expect(solve({ ...base, iout: 2 }, { inductance: 4.7e-6 }).coreLoss).toBeNull();
   });
 });
