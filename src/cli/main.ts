@@ -7,9 +7,10 @@ import { reportCommand } from "./commands/reportCommand.ts";
 
 const USAGE = `usage: npm run --silent cli -- <command> [options]
   parse <parts.csv|tsv> [--map "Header=quantity:unit"]… [--json]
-  rank --spec <spec.json> --parts <file> [--parts <file>]… [--json]
+  rank (--spec <spec.json> --parts <file> [--parts <file>]… | --project <project.json>) [--json | --csv]
   waveform --spec <spec.json> --parts <file> --part <part number> [--vin V] [--iout A] [--inductance min|nom|max] [--json]
-  report --spec <spec.json> --parts <file> --shortlist <pn,pn,…> --out <report.html>`;
+  report (--spec <spec.json> --parts <file>… --shortlist <pn,pn,…> | --project <project.json> [--shortlist <pn,…>])
+         --out <report.html> [--name <design name>] [--generated-at <ISO time>]`;
 
 const OPTIONS = {
   json: { type: "boolean" },
@@ -22,6 +23,10 @@ const OPTIONS = {
   map: { type: "string", multiple: true },
   shortlist: { type: "string" },
   out: { type: "string" },
+  csv: { type: "boolean" },
+  project: { type: "string" },
+  name: { type: "string" },
+  "generated-at": { type: "string" },
   help: { type: "boolean", short: "h" },
 } as const;
 
@@ -68,6 +73,11 @@ export function runCli(argv: string[], out: (text: string) => void, err: (text: 
 
 const invokedDirectly = process.argv[1] !== undefined && import.meta.url === new URL(`file://${process.argv[1]}`).href;
 if (invokedDirectly) {
+  // A reader that stops early (`rank --csv | head`) closes the pipe: that is the reader's choice, not an error.
+  process.stdout.on("error", (error: NodeJS.ErrnoException) => {
+    if (error.code === "EPIPE") process.exit(0);
+    throw error;
+  });
   process.exitCode = runCli(
     process.argv.slice(2),
     (text) => process.stdout.write(text.endsWith("\n") ? text : `${text}\n`),

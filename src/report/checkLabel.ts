@@ -1,0 +1,18 @@
+import type { CheckName } from "../engine/types.ts";
+
+/** Readable names of the engine's checks, for tables and the ranking's first problem. */
+export const CHECK_LABEL: Readonly<Record<CheckName, string>> = {
+  operatingPoint: "Operating point",
+  saturation: "Saturation",
+  heating: "Heating current",
+  temperatureRise: "Temperature rise",
+  temperature: "Hot-spot temperature",
+  rippleRatio: "Ripple ratio",
+  lightLoadMode: "Light-load mode",
+  srf: "Self-resonance",
+  length: "Length",
+  width: "Width",
+  height: "Height",
+  footprint: "Footprint",
+  price: "Price",
+};
