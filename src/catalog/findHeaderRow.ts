@@ -1,5 +1,6 @@
 import { parseUnit } from "./parseUnit.ts";
 import { recogniseHeader } from "./recogniseHeader.ts";
+import { QUANTITIES } from "./quantities.ts";
 
 export interface HeaderLocation {
   /** Record index of the header, -1 when there is no content at all. */
@@ -18,16 +19,29 @@ export function isBlank(row: string[]): boolean {
   return true;
 }
 
-/** A unit row holds only units ("µH", "[mΩ]", "%") and blanks, and at least one unit. */
-export function isUnitRow(row: string[]): boolean {
+/**
+ * A unit row holds only units ("µH", "[mΩ]", "%") and blanks, and at least one unit. A cell
+ * that is a bare number is data, never a unit, and under a text column (part number, maker…)
+ * a unit row has nothing: otherwise a first part such as "A,1" would be taken for units and lost.
+ */
+export function isUnitRow(row: string[], header?: string[]): boolean {
   let units = 0;
-  for (const cell of row) {
-    const c = cell.trim();
+  for (let column = 0; column < row.length; column++) {
+    const c = (row[column] as string).trim();
     if (c === "" || /^[-–—]$/.test(c)) continue;
-    if (parseUnit(c) === null) return false;
+    if (/^[-+]?[\d.,\s]+$/.test(c) || parseUnit(c) === null) return false;
+    const above = header?.[column];
+    if (above !== undefined && isTextColumn(above)) return false;
     units++;
   }
   return units > 0;
+}
+
+function isTextColumn(header: string): boolean {
+  const quantity = recogniseHeader(header).quantity;
+  // Composite columns such as "L x W x H" have no entry of their own.
+  const known: Partial<Record<string, { dimension: string }>> = QUANTITIES;
+  return quantity !== null && known[quantity]?.dimension === "text";
 }
 
 /**
@@ -57,8 +71,9 @@ export function findHeaderRow(rows: string[][]): HeaderLocation {
   let unitRow = -1;
   const below = nextContent(rows, header + 1, 1);
   const above = nextContent(rows, header - 1, -1);
-  if (below >= 0 && isUnitRow(rows[below] as string[])) unitRow = below;
-  else if (above >= 0 && isUnitRow(rows[above] as string[])) unitRow = above;
+  const headerCells = rows[header] as string[];
+  if (below >= 0 && isUnitRow(rows[below] as string[], headerCells)) unitRow = below;
+  else if (above >= 0 && isUnitRow(rows[above] as string[], headerCells)) unitRow = above;
   return { header, unitRow };
 }
 

@@ -252,3 +252,19 @@ describe("importPartList", () => {
     expect(r.extra["A1"]).toEqual({ "#": "1" });
   });
 });
+
+describe("importPartList unit rows", () => {
+  it("importPartList keeps a first part that looks like units (A,1) as a part, not a unit row", () => {
+    const r = importPartList("Part Number,Inductance (uH)\nA,1\nB,2.2\n");
+    expect(r.parts.map((p) => p.partNumber)).toEqual(["A", "B"]);
+    expect(r.parts[0]!.inductance).toBeCloseTo(1e-6, 15);
+    expect(r.parts.length + r.rejected.length).toBe(r.dataRows);
+  });
+
+  it("importPartList still reads a real unit row under the header", () => {
+    const r = importPartList("Part Number,Inductance,DCR\n,uH,mOhm\nP1,4.7,20\n");
+    expect(r.parts).toHaveLength(1);
+    expect(r.parts[0]!.inductance).toBeCloseTo(4.7e-6, 15);
+    expect(r.parts[0]!.dcrMax ?? r.parts[0]!.dcrTyp).toBeCloseTo(0.02, 15);
+  });
+});
