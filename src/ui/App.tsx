@@ -1,47 +1,65 @@
-import { useMemo, useState } from "react";
-import { loadDemoScenario } from "../state/demoScenario.ts";
-import { rankParts } from "../engine/rankParts.ts";
-import { requiredInductance } from "../engine/requiredInductance.ts";
-import { formatQuantity } from "../engine/formatQuantity.ts";
-import { RankingTable } from "./ranking/RankingTable.tsx";
-import { Cautions } from "./cautions/Cautions.tsx";
-import { SpecSummary } from "./SpecSummary.tsx";
+import { useState } from "react";
+import { useWorkspace } from "../state/workspaceStore.ts";
+import { acknowledgeCautions } from "../state/workspaceActions.ts";
+import type { ViewState } from "../state/workspace.ts";
+import { assertNever } from "../engine/assertNever.ts";
+import { TopBar } from "./shell/TopBar.tsx";
+import { ScreenTabs } from "./shell/ScreenTabs.tsx";
+import { NoticeList } from "./shell/NoticeList.tsx";
+import { CautionsOverlay } from "./shell/CautionsOverlay.tsx";
+import { DesignScreen } from "./design/DesignScreen.tsx";
+import { PartsScreen } from "./parts/PartsScreen.tsx";
+import { RankingScreen } from "./ranking/RankingScreen.tsx";
+import { DetailScreen } from "./detail/DetailScreen.tsx";
+import { CompareScreen } from "./compare/CompareScreen.tsx";
+import { SweepsScreen } from "./sweeps/SweepsScreen.tsx";
+import { TradeoffScreen } from "./tradeoff/TradeoffScreen.tsx";
+
+function Screen({ screen }: { screen: ViewState["screen"] }) {
+  switch (screen) {
+    case "design":
+      return <DesignScreen />;
+    case "parts":
+      return <PartsScreen />;
+    case "ranking":
+      return <RankingScreen />;
+    case "detail":
+      return <DetailScreen />;
+    case "compare":
+      return <CompareScreen />;
+    case "sweeps":
+      return <SweepsScreen />;
+    case "tradeoff":
+      return <TradeoffScreen />;
+    default:
+      return assertNever(screen);
+  }
+}
 
 export function App() {
-  const scenario = useMemo(() => loadDemoScenario(), []);
-  const results = useMemo(() => rankParts(scenario.spec, scenario.list.parts), [scenario]);
-  const band = useMemo(() => requiredInductance(scenario.spec), [scenario]);
-  const [cautionsOpen, setCautionsOpen] = useState(true);
-  const passing = results.filter((r) => r.pass).length;
+  const screen = useWorkspace((w) => w.view.screen);
+  const acknowledged = useWorkspace((w) => w.view.cautionsAcknowledged);
+  const [cautionsOpen, setCautionsOpen] = useState(false);
+  const showCautions = cautionsOpen || !acknowledged;
+  const close = () => {
+    acknowledgeCautions();
+    setCautionsOpen(false);
+  };
   return (
     <div className="app">
-      <header className="topbar">
-        <div className="brand">
-          <span className="brand-mark" aria-hidden="true">∿</span> Coilsift
-          <span className="brand-sub">inductor selection workbench</span>
-        </div>
-        <button type="button" className="link-button" onClick={() => setCautionsOpen(true)}>
-          Cautions
-        </button>
-      </header>
-      {cautionsOpen && <Cautions onClose={() => setCautionsOpen(false)} />}
+      <TopBar onCautions={() => setCautionsOpen(true)} />
+      <ScreenTabs />
+      {showCautions && <CautionsOverlay onClose={close} />}
+      <NoticeList />
       <main>
-        <section aria-labelledby="scenario-title" className="panel">
-          <h1 id="scenario-title">{scenario.name}</h1>
-          <SpecSummary spec={scenario.spec} />
-          <p className="band">
-            Inductance for the ripple window at nominal input and full load:{" "}
-            <strong>{band === null ? "no solution" : `${formatQuantity(band.min, "H")} – ${formatQuantity(band.max, "H")}`}</strong>
-          </p>
-        </section>
-        <section aria-labelledby="ranking-title" className="panel">
-          <h2 id="ranking-title">
-            Ranking <span className="count">{results.length} parts from {scenario.list.name}, {passing} pass every check</span>
-          </h2>
-          <RankingTable results={results} parts={scenario.list.parts} />
-        </section>
+        <Screen screen={screen} />
       </main>
-      <footer className="footnote">Estimates only — verify against the maker's datasheet and on the bench.</footer>
+      <footer className="footnote">
+        Estimates only: verify against the maker's datasheet and on the bench.{" "}
+        <button type="button" className="link-button" onClick={() => setCautionsOpen(true)}>
+          Read the cautions
+        </button>
+      </footer>
     </div>
   );
 }

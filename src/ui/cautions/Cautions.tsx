@@ -13,7 +13,8 @@ export function Cautions({ onClose }: { onClose: () => void }) {
           <li key={c}>{c}</li>
         ))}
       </ul>
-      <button type="button" onClick={onClose}>
+      {/* Focus lands here so that the note is read first and closed from the keyboard. */}
+      <button type="button" onClick={onClose} autoFocus>
         Understood
       </button>
     </aside>

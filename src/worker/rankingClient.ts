@@ -1,0 +1,155 @@
+import type { Part, Spec } from "../engine/types.ts";
+import type { RankReply, RankRequest } from "./protocol.ts";
+import { PART_CHUNK } from "./protocol.ts";
+import { sliceBuffers, type SliceFigures } from "./screenSlice.ts";
+import type { Ranking } from "./finishRanking.ts";
+
+/** What the page needs of a Worker (a real one, or a test's in-process stand-in). */
+export interface WorkerLike {
+  postMessage(message: RankRequest, transfer?: Transferable[]): void;
+  onmessage: ((event: MessageEvent<RankReply>) => void) | null;
+  onerror?: ((event: ErrorEvent) => void) | null;
+  terminate(): void;
+}
+
+export interface RankingListener {
+  onProgress(job: number, done: number, total: number): void;
+  onRanked(job: number, ranking: Ranking): void;
+  onFailed(job: number, message: string): void;
+}
+
+interface Job {
+  job: number;
+  version: number;
+  spec: Spec;
+  count: number;
+  slices: SliceFigures[];
+  progress: number[];
+}
+
+/** Lets the page handle input between two chunks of a long send. */
+const pause = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
+/**
+ * Runs rankings on a pool of workers: each screens one slice of the list, the first one joins the
+ * slices and ranks the whole (scores are relative to the best part, so they need every slice).
+ * A new request supersedes the running one; the workers drop stale work at their next step.
+ * Every message goes through one queue, so lists, catalogs and jobs arrive in the order sent.
+ */
+export class RankingClient {
+  private nextJob = 1;
+  private current: Job | null = null;
+  private queue: Promise<void> = Promise.resolve();
+
+  private listener: RankingListener;
+
+  constructor(
+    private readonly workers: WorkerLike[],
+    listener?: RankingListener,
+  ) {
+    this.listener = listener ?? { onProgress: () => {}, onRanked: () => {}, onFailed: () => {} };
+    workers.forEach((w, k) => {
+      w.onmessage = (event) => this.receive(k, event.data);
+      if ("onerror" in w) w.onerror = (event) => this.fail(event.message || "a ranking worker stopped");
+    });
+  }
+
+  setListener(listener: RankingListener): void {
+    this.listener = listener;
+  }
+
+  get size(): number {
+    return this.workers.length;
+  }
+
+  private enqueue(step: () => void | Promise<void>): Promise<void> {
+    this.queue = this.queue.then(step, step);
+    return this.queue;
+  }
+
+  /** Sends one list's parts to every worker, in chunks with pauses between them. */
+  sendList(id: string, name: string, parts: readonly Part[]): Promise<void> {
+    return this.enqueue(async () => {
+      for (let at = 0; at === 0 || at < parts.length; at += PART_CHUNK) {
+        const chunk = parts.slice(at, at + PART_CHUNK);
+        for (const w of this.workers) w.postMessage({ type: "list", id, name, parts: chunk, first: at === 0 });
+        if (at + PART_CHUNK < parts.length) await pause();
+      }
+    });
+  }
+
+  dropList(id: string): Promise<void> {
+    return this.enqueue(() => {
+      for (const w of this.workers) w.postMessage({ type: "dropList", id });
+    });
+  }
+
+  setCatalog(version: number, order: string[]): Promise<void> {
+    return this.enqueue(() => {
+      for (const w of this.workers) w.postMessage({ type: "catalog", version, order });
+    });
+  }
+
+  /** Starts ranking `count` parts of catalog `version`; returns the job number. */
+  rank(spec: Spec, version: number, count: number): number {
+    const job = this.nextJob++;
+    const previous = this.current;
+    const n = this.workers.length;
+    this.current = { job, version, spec, count, slices: [], progress: new Array<number>(n).fill(0) };
+    void this.enqueue(() => {
+      if (this.current?.job !== job) return;
+      if (previous !== null) for (const w of this.workers) w.postMessage({ type: "cancel", job: previous.job });
+      const size = Math.ceil(count / n);
+      this.workers.forEach((w, k) => {
+        const from = Math.min(count, k * size);
+        w.postMessage({ type: "screen", job, version, spec, from, to: Math.min(count, from + size) });
+      });
+    });
+    return job;
+  }
+
+  cancel(): void {
+    const running = this.current;
+    this.current = null;
+    if (running !== null) void this.enqueue(() => this.workers.forEach((w) => w.postMessage({ type: "cancel", job: running.job })));
+  }
+
+  terminate(): void {
+    this.current = null;
+    for (const w of this.workers) w.terminate();
+  }
+
+  private fail(message: string): void {
+    const running = this.current;
+    if (running === null) return;
+    this.current = null;
+    this.listener.onFailed(running.job, message);
+  }
+
+  private receive(worker: number, reply: RankReply): void {
+    const job = this.current;
+    if (job === null || reply.job !== job.job) return;
+    switch (reply.type) {
+      case "progress":
+        job.progress[worker] = reply.done;
+        this.listener.onProgress(job.job, job.progress.reduce((a, b) => a + b, 0), job.count);
+        return;
+      case "slice": {
+        job.slices.push(reply.slice);
+        if (job.slices.length < this.workers.length) return;
+        const slices = job.slices;
+        job.slices = [];
+        // The slices' buffers move on to the first worker; the page keeps no copy.
+        this.workers[0]!.postMessage({ type: "finish", job: job.job, version: job.version, spec: job.spec, slices }, slices.flatMap(sliceBuffers));
+        return;
+      }
+      case "ranked":
+        this.current = null;
+        this.listener.onRanked(job.job, reply.ranking);
+        return;
+      case "failed":
+        this.fail(reply.message);
+        return;
+    }
+  }
+}

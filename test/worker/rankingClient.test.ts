@@ -1,0 +1,89 @@
+import { describe, expect, it } from "vitest";
+import { readFileSync } from "node:fs";
+import { importPartList } from "../../src/catalog/importPartList.ts";
+import { parseSpec } from "../../src/engine/parseSpec.ts";
+import { screenParts } from "../../src/engine/screenParts.ts";
+import type { Spec } from "../../src/engine/types.ts";
+import { RankingClient } from "../../src/worker/rankingClient.ts";
+import type { Ranking } from "../../src/worker/finishRanking.ts";
+import { FakeRankWorker } from "./fakeWorkers.ts";
+
+const spec = (parseSpec(JSON.parse(readFileSync("sample-parts/demo-spec.json", "utf8"))) as { ok: true; spec: Spec }).spec;
+const parts = importPartList(readFileSync("sample-parts/demo-parts.csv", "utf8")).parts;
+
+function client(workers: number) {
+  const events: { ranked: [number, Ranking][]; failed: string[]; progress: number[] } = { ranked: [], failed: [], progress: [] };
+  let resolve: () => void = () => {};
+  const c = new RankingClient(
+    Array.from({ length: workers }, () => new FakeRankWorker()),
+    {
+      onProgress: (_job, done) => events.progress.push(done),
+      onRanked: (job, ranking) => {
+        events.ranked.push([job, ranking]);
+        resolve();
+      },
+      onFailed: (_job, message) => {
+        events.failed.push(message);
+        resolve();
+      },
+    },
+  );
+  const settled = () => new Promise<void>((r) => (resolve = r));
+  return { c, events, settled };
+}
+
+describe("RankingClient", () => {
+  it("RankingClient over three workers ranks like screenParts in one pass", async () => {
+    const { c, events, settled } = client(3);
+    void c.sendList("a", "demo", parts);
+    void c.setCatalog(1, ["a"]);
+    const done = settled();
+    c.rank(spec, 1, parts.length);
+    await done;
+    expect(events.failed).toEqual([]);
+    const whole = screenParts(spec, parts);
+    expect(Array.from(events.ranked[0]![1].order)).toEqual(Array.from(whole.order));
+    expect(events.progress.at(-1)).toBe(parts.length);
+  });
+
+  it("RankingClient.rank supersedes a running job: only the newest one is reported", async () => {
+    const { c, events, settled } = client(2);
+    void c.sendList("a", "demo", parts);
+    void c.setCatalog(1, ["a"]);
+    c.rank(spec, 1, parts.length);
+    const second = { ...spec, vin: { ...spec.vin, max: 20 } };
+    const done = settled();
+    const job = c.rank(second, 1, parts.length);
+    await done;
+    expect(events.ranked.map(([j]) => j)).toEqual([job]);
+    expect(Array.from(events.ranked[0]![1].order)).toEqual(Array.from(screenParts(second, parts).order));
+  });
+
+  it("RankingClient merges lists as mergeLists does: the later list wins a duplicate part number", async () => {
+    const { c, events, settled } = client(2);
+    const changed = parts.slice(0, 5).map((p) => ({ ...p, price: 99 }));
+    void c.sendList("a", "demo", parts);
+    void c.sendList("b", "override", changed);
+    void c.setCatalog(2, ["a", "b"]);
+    const done = settled();
+    c.rank(spec, 2, parts.length);
+    await done;
+    expect(events.ranked[0]![1].count).toBe(parts.length);
+    void c.dropList("b");
+    void c.setCatalog(3, ["a"]);
+    const again = settled();
+    c.rank(spec, 3, parts.length);
+    await again;
+    expect(Array.from(events.ranked[1]![1].order)).toEqual(Array.from(screenParts(spec, parts).order));
+  });
+
+  it("RankingClient reports a job for a catalog version the workers do not have as failed", async () => {
+    const { c, events, settled } = client(1);
+    void c.sendList("a", "demo", parts);
+    void c.setCatalog(1, ["a"]);
+    const done = settled();
+    c.rank(spec, 7, parts.length);
+    await done;
+    expect(events.failed[0]).toMatch(/catalog 7/);
+  });
+});
