@@ -1,4 +1,4 @@
-import type { Part, ResultStatus, Spec } from "./types.ts";
+import type { Mode, Part, ResultStatus, Spec } from "./types.ts";
 import { effectiveTolerance, inputVoltagePoints } from "./cornerPoints.ts";
 import { CornerSolver, preparePart } from "./evaluateCorner.ts";
 import { CornerAccumulator } from "./cornerAccumulator.ts";
@@ -47,9 +47,74 @@ export interface PartFigures {
   unreachable: Uint8Array;
 }
 
+/** The verdict and headline figures of one part, as screenFigures and the ranking worker store them. */
+export interface PartVerdict {
+  status: ResultStatus;
+  failures: number;
+  /** Worst-case figures, NaN where no corner was reachable (tempRise NaN when not modelled). */
+  peak: number;
+  irms: number;
+  totalLoss: number;
+  tempRise: number;
+  /** Smallest current margin, and the saturation and heating margins apart; NaN when unknown. */
+  minMargin: number;
+  saturationMargin: number;
+  heatingMargin: number;
+  unreachable: boolean;
+  /** Mode of the first non-CCM corner at minimum load, "ccm" when all are, null when none was reachable. */
+  lightLoadMode: Mode | null;
+}
+
 /**
- * Evaluates parts[from, to) at every corner (same order as cornerPoints). Slices can be
- * computed apart (in several workers) and joined with joinFigures before rankFigures.
+ * One part at every corner (the order of cornerPoints), judged without reasons. The single loop
+ * behind screenFigures and the browser's ranking worker, so both give evaluatePart's numbers.
+ */
+export function screenPart(solver: CornerSolver, spec: Spec, part: Part): PartVerdict {
+  const prepared = preparePart(part);
+  const tolerance = effectiveTolerance(spec, part);
+  const acc = new CornerAccumulator(spec, part.isat);
+  const loads = spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max];
+  solver.startPart();
+  let index = 0;
+  let lightReachable = false;
+  for (const { vin } of inputVoltagePoints(spec)) {
+    for (const iout of loads) {
+      for (let k = tolerance > 0 ? -1 : 0; k <= (tolerance > 0 ? 1 : 0); k++) {
+        solver.solve(prepared, vin, iout, part.inductance * (1 + k * tolerance));
+        if (iout === spec.iout.min && !solver.solution.unreachable) lightReachable = true;
+        acc.add(solver.solution, solver, vin, iout, index++);
+      }
+    }
+  }
+  const checks = partChecks(spec, part, acc, null);
+  let failures = 0;
+  let saturationMargin = NaN;
+  let heatingMargin = NaN;
+  for (const c of checks) {
+    if (c.status === "fail") failures++;
+    if (c.status !== "unchecked" && c.margin !== null) {
+      if (c.name === "saturation") saturationMargin = c.margin;
+      else if (c.name === "heating") heatingMargin = c.margin;
+    }
+  }
+  return {
+    status: statusOf(checks),
+    failures,
+    peak: acc.peakAt < 0 ? NaN : acc.peak,
+    irms: acc.irmsAt < 0 ? NaN : acc.irms,
+    totalLoss: acc.totalLossAt < 0 ? NaN : acc.totalLoss,
+    tempRise: acc.tempRiseAt < 0 ? NaN : acc.tempRise,
+    minMargin: minimumMargin(checks) ?? NaN,
+    saturationMargin,
+    heatingMargin,
+    unreachable: acc.firstUnreachable >= 0,
+    lightLoadMode: !lightReachable ? null : acc.lightLoadAt < 0 ? "ccm" : acc.lightLoadMode,
+  };
+}
+
+/**
+ * Evaluates parts[from, to) at every corner. Slices can be computed apart (in several workers)
+ * and joined with joinFigures before rankFigures.
  */
 export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to = parts.length, options: ScreenOptions = {}): PartFigures {
   const n = Math.max(0, Math.min(to, parts.length) - from);
@@ -62,36 +127,17 @@ export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to =
   const minMargin = new Float64Array(n);
   const unreachable = new Uint8Array(n);
   const solver = new CornerSolver(spec);
-  const vins = inputVoltagePoints(spec).map((v) => v.vin);
-  const loads = spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max];
   const every = options.progressEvery ?? 1000;
   for (let p = 0; p < n; p++) {
-    const part = parts[from + p]!;
-    const prepared = preparePart(part);
-    const tolerance = effectiveTolerance(spec, part);
-    const factors = tolerance > 0 ? [1 - tolerance, 1, 1 + tolerance] : [1];
-    const acc = new CornerAccumulator(spec, part.isat);
-    solver.startPart();
-    let index = 0;
-    for (const vin of vins) {
-      for (const iout of loads) {
-        for (const f of factors) {
-          solver.solve(prepared, vin, iout, part.inductance * f);
-          acc.add(solver.solution, solver, vin, iout, index++);
-        }
-      }
-    }
-    const checks = partChecks(spec, part, acc, null);
-    status[p] = statusOf(checks);
-    let failed = 0;
-    for (const c of checks) if (c.status === "fail") failed++;
-    failures[p] = failed;
-    peak[p] = acc.peakAt < 0 ? NaN : acc.peak;
-    irms[p] = acc.irmsAt < 0 ? NaN : acc.irms;
-    totalLoss[p] = acc.totalLossAt < 0 ? NaN : acc.totalLoss;
-    tempRise[p] = acc.tempRiseAt < 0 ? NaN : acc.tempRise;
-    minMargin[p] = minimumMargin(checks) ?? NaN;
-    unreachable[p] = acc.firstUnreachable >= 0 ? 1 : 0;
+    const v = screenPart(solver, spec, parts[from + p]!);
+    status[p] = v.status;
+    failures[p] = v.failures;
+    peak[p] = v.peak;
+    irms[p] = v.irms;
+    totalLoss[p] = v.totalLoss;
+    tempRise[p] = v.tempRise;
+    minMargin[p] = v.minMargin;
+    unreachable[p] = v.unreachable ? 1 : 0;
     if (options.onProgress !== undefined && (p + 1) % every === 0) options.onProgress(p + 1, n);
   }
   return { status, failures, peak, irms, totalLoss, tempRise, minMargin, unreachable };

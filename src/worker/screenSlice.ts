@@ -1,17 +1,11 @@
 import type { Part, Spec } from "../engine/types.ts";
-import { effectiveTolerance, inputVoltagePoints } from "../engine/cornerPoints.ts";
-import { CornerSolver, preparePart } from "../engine/evaluateCorner.ts";
-import { CornerAccumulator } from "../engine/cornerAccumulator.ts";
-import { partChecks } from "../engine/partChecks.ts";
-import { minimumMargin, statusOf } from "../engine/evaluatePart.ts";
+import { CornerSolver } from "../engine/evaluateCorner.ts";
+import { screenPart } from "../engine/screenParts.ts";
 import { MODE_UNKNOWN, modeCode, statusCode } from "./codes.ts";
 
 /**
- * Figures of parts[from, to): the engine's screenFigures plus what the ranking table also shows
- * (mode at minimum load, the saturation and heating margins apart). It drives the same
- * CornerSolver and CornerAccumulator in the same corner order as screenFigures, so the numbers
- * are the engine's; test/worker/screenSlice.test.ts holds the two side by side. Once the
- * engine's PartFigures carries these three fields this becomes a call to screenFigures.
+ * Figures of parts[from, to) in transferable typed arrays: the engine's screenPart verdict of
+ * each part, with the string unions as codes (codes.ts).
  */
 export interface SliceFigures {
   from: number;
@@ -61,49 +55,20 @@ export function sliceBuffers(s: SliceFigures): ArrayBuffer[] {
  */
 export function screenInto(spec: Spec, parts: readonly Part[], from: number, to: number, out: SliceFigures): void {
   const solver = new CornerSolver(spec);
-  const vins = inputVoltagePoints(spec).map((v) => v.vin);
-  const loads = spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max];
   for (let i = from; i < to; i++) {
-    const part = parts[i]!;
+    const v = screenPart(solver, spec, parts[i]!);
     const p = i - out.from;
-    const prepared = preparePart(part);
-    const tolerance = effectiveTolerance(spec, part);
-    const factors = tolerance > 0 ? [1 - tolerance, 1, 1 + tolerance] : [1];
-    const acc = new CornerAccumulator(spec, part.isat);
-    solver.startPart();
-    let index = 0;
-    let lightReachable = false;
-    for (const vin of vins) {
-      for (const iout of loads) {
-        for (const f of factors) {
-          solver.solve(prepared, vin, iout, part.inductance * f);
-          if (iout === spec.iout.min && !solver.solution.unreachable) lightReachable = true;
-          acc.add(solver.solution, solver, vin, iout, index++);
-        }
-      }
-    }
-    const checks = partChecks(spec, part, acc, null);
-    out.status[p] = statusCode(statusOf(checks));
-    let failed = 0;
-    let sat = NaN;
-    let heat = NaN;
-    for (const c of checks) {
-      if (c.status === "fail") failed++;
-      if (c.status !== "unchecked" && c.margin !== null) {
-        if (c.name === "saturation") sat = c.margin;
-        else if (c.name === "heating") heat = c.margin;
-      }
-    }
-    out.failures[p] = failed;
-    out.peak[p] = acc.peakAt < 0 ? NaN : acc.peak;
-    out.irms[p] = acc.irmsAt < 0 ? NaN : acc.irms;
-    out.totalLoss[p] = acc.totalLossAt < 0 ? NaN : acc.totalLoss;
-    out.tempRise[p] = acc.tempRiseAt < 0 ? NaN : acc.tempRise;
-    out.minMargin[p] = minimumMargin(checks) ?? NaN;
-    out.unreachable[p] = acc.firstUnreachable >= 0 ? 1 : 0;
-    out.lightLoad[p] = !lightReachable ? MODE_UNKNOWN : acc.lightLoadAt < 0 ? modeCode("ccm") : modeCode(acc.lightLoadMode);
-    out.satMargin[p] = sat;
-    out.heatMargin[p] = heat;
+    out.status[p] = statusCode(v.status);
+    out.failures[p] = v.failures;
+    out.peak[p] = v.peak;
+    out.irms[p] = v.irms;
+    out.totalLoss[p] = v.totalLoss;
+    out.tempRise[p] = v.tempRise;
+    out.minMargin[p] = v.minMargin;
+    out.unreachable[p] = v.unreachable ? 1 : 0;
+    out.lightLoad[p] = v.lightLoadMode === null ? MODE_UNKNOWN : modeCode(v.lightLoadMode);
+    out.satMargin[p] = v.saturationMargin;
+    out.heatMargin[p] = v.heatingMargin;
   }
 }
 
