@@ -1,7 +1,7 @@
 import { benchEngineRank } from "./engineRank.bench.ts";
 import { gcAvailable } from "./measure.ts";
 
-/** `npm run bench`: figures only, never pass/fail. */
+/** `npm run bench [engine|catalog|ui]`: figures only, never pass/fail. */
 async function main(): Promise<void> {
   if (!gcAvailable()) console.log("note: run with node --expose-gc for forced collections between runs");
   const only = process.argv[2];
@@ -11,6 +11,12 @@ async function main(): Promise<void> {
     benches.push(["catalog", benchCatalogImport]);
   } catch (error) {
     console.log(`catalog import bench not available: ${(error as Error).message}`);
+  }
+  try {
+    const { benchUiRanking } = await import("./uiRank.bench.ts");
+    benches.push(["ui", benchUiRanking]);
+  } catch (error) {
+    console.log(`browser ranking bench not available: ${(error as Error).message}`);
   }
   for (const [name, bench] of benches) {
     if (only !== undefined && only !== name) continue;
