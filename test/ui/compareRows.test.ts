@@ -24,3 +24,12 @@ describe("compareRows", () => {
     expect(compareRows(items.slice(0, 1)).every((r) => r.best.length === 0)).toBe(true);
   });
 });
+
+describe("compareRows with a failing part", () => {
+  it("compareRows never marks a failing part's score best beside parts that work", () => {
+    const failing = "QC-PIR6035-1U";
+    const mixed = [...items.slice(0, 2), { part: part(failing), e: evaluatePart(demoSpec, part(failing)), score: 99 }];
+    expect(mixed[2]!.e.status).toBe("fail");
+    expect(compareRows(mixed).find((r) => r.label === "Score")!.best).toEqual([0]);
+  });
+});

@@ -35,7 +35,8 @@ const lightLoad = (it: CompareItem) => {
 
 const ROWS: RowDef[] = [
   { label: "Result", better: null, text: (it) => (it.e.status === "pass" ? "✓ pass" : it.e.status === "incomplete" ? "? incomplete" : `✗ fail (${it.e.failures.length})`) },
-  { label: "Score", better: "high", value: (it) => it.score, text: (it) => (it.score === null ? "—" : it.score.toFixed(1)) },
+  // A failing part's score only orders the near misses: it never earns "best" beside parts that work.
+  { label: "Score", better: "high", value: (it) => (it.e.status === "fail" ? null : it.score), text: (it) => (it.score === null ? "—" : it.score.toFixed(1)) },
   { label: "Inductance", better: null, text: (it) => henries(it.part.inductance) },
   { label: "Tolerance", better: "low", value: (it) => it.part.tolerance, text: (it) => (it.part.tolerance === null ? "—" : percent(it.part.tolerance)) },
   { label: "DCR (max, else typ.)", better: "low", value: (it) => it.part.dcrMax ?? it.part.dcrTyp, text: (it) => ohms(it.part.dcrMax ?? it.part.dcrTyp) },
