@@ -10,7 +10,7 @@ import { partBasis, type PartOrigin } from "./partBasis.ts";
 import { listChecksum } from "./listChecksum.ts";
 import { METHOD_SOURCES, type SourceKey } from "./methodSources.ts";
 import { REPORT_CAUTIONS } from "./reportCautions.ts";
-import { CHECK_LABEL } from "./checkLabel.ts";
+import { CHECK_LABEL } from "../engine/checkLabels.ts";
 import type { ListSummary, RankingRow, ReportInput, ReportModel, ShortlistEntry, WaveformView } from "./types.ts";
 
 export const DEFAULT_RANKING_ROWS = 20;

@@ -5,7 +5,7 @@ import { fmt } from "./fmt.ts";
 import { statusBadge } from "./statusBadge.ts";
 import { waveformChart } from "./waveformChart.ts";
 import { renderCornerTable } from "./renderCornerTable.ts";
-import { CHECK_LABEL } from "./checkLabel.ts";
+import { CHECK_LABEL } from "../engine/checkLabels.ts";
 import { modeLabel } from "./modeLabel.ts";
 import type { ShortlistEntry } from "./types.ts";
 

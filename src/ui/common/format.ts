@@ -1,4 +1,4 @@
-import type { CheckName, Mode, Part } from "../../engine/types.ts";
+import type { Mode, Part } from "../../engine/types.ts";
 import { formatPercent, formatQuantity } from "../../engine/formatQuantity.ts";
 
 export const amps = (x: number | null) => formatQuantity(x, "A");
@@ -48,18 +48,4 @@ export function toleranceText(p: Part): string {
   return p.tolerance === null ? "tol. not given" : `±${Number((p.tolerance * 100).toPrecision(3))} %`;
 }
 
-export const CHECK_LABEL: Record<CheckName, string> = {
-  operatingPoint: "Operating point",
-  saturation: "Saturation",
-  heating: "Heating current",
-  temperatureRise: "Temperature rise",
-  temperature: "Hot spot",
-  rippleRatio: "Ripple ratio",
-  lightLoadMode: "Light-load mode",
-  srf: "Self-resonance",
-  length: "Length",
-  width: "Width",
-  height: "Height",
-  footprint: "Footprint",
-  price: "Price",
-};
+export { CHECK_LABEL } from "../../engine/checkLabels.ts";

@@ -1,6 +1,6 @@
-import type { CheckName } from "../engine/types.ts";
+import type { CheckName } from "./types.ts";
 
-/** Readable names of the engine's checks, for tables and the ranking's first problem. */
+/** Readable names of the checks, shared by the workbench, the report and the exports. */
 export const CHECK_LABEL: Readonly<Record<CheckName, string>> = {
   operatingPoint: "Operating point",
   saturation: "Saturation",
