@@ -5,7 +5,7 @@ import { mappingMemory } from "./mappingMemory.ts";
 import { notify } from "./noticeStore.ts";
 import { newListId } from "./workspaceDefaults.ts";
 import { startImport } from "../worker/importClient.ts";
-import { catalog, patchPending, received, running, sourceKey } from "./catalogInternals.ts";
+import { catalog, loadingList, patchPending, received, running, sourceKey } from "./catalogInternals.ts";
 
 export interface NewListInput {
   name: string;
@@ -52,26 +52,7 @@ export function importNewList(input: NewListInput): number {
             addedAt: new Date().toISOString(),
           };
           const key = sourceKey(source);
-          catalogStore.setState((c) => ({
-            lists: {
-              ...c.lists,
-              [source.id]: {
-                id: source.id,
-                name: source.name,
-                state: "loading",
-                phase: null,
-                done: 0,
-                total: 0,
-                summary: null,
-                parts: [],
-                signature: null,
-                rememberedApplied: false,
-                message: null,
-                reimporting: false,
-                sourceKey: key,
-              },
-            },
-          }));
+          catalogStore.setState((c) => ({ lists: { ...c.lists, [source.id]: loadingList(source, null, 0) } }));
           addListSource(source);
           received(source.id, outcome, key);
           if (outcome.rememberedApplied) notify("info", `${input.name}: the column choices saved for this header layout were applied.`);

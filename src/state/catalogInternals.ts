@@ -23,6 +23,25 @@ export function sourceKey(l: PartListSource): string {
   return `${l.text.length}:${JSON.stringify(l.mapping)}:${JSON.stringify(l.seriesSaturation)}`;
 }
 
+/** A list that has started (re)importing: nothing read yet. */
+export function loadingList(source: PartListSource, phase: LoadedList["phase"], total: number): LoadedList {
+  return {
+    id: source.id,
+    name: source.name,
+    state: "loading",
+    phase,
+    done: 0,
+    total,
+    summary: null,
+    parts: [],
+    signature: null,
+    rememberedApplied: false,
+    message: null,
+    reimporting: false,
+    sourceKey: sourceKey(source),
+  };
+}
+
 export function patchList(id: string, patch: Partial<LoadedList>): void {
   catalogStore.setState((c) => {
     const list = c.lists[id];

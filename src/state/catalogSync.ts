@@ -2,7 +2,7 @@ import type { PartListSource } from "./workspace.ts";
 import { workspaceStore } from "./workspaceStore.ts";
 import { catalogStore } from "./catalogStore.ts";
 import { startImport } from "../worker/importClient.ts";
-import { catalog, patchList, received, remerge, running, sourceKey, type CatalogDeps } from "./catalogInternals.ts";
+import { catalog, loadingList, patchList, received, remerge, running, sourceKey, type CatalogDeps } from "./catalogInternals.ts";
 
 export type { CatalogDeps } from "./catalogInternals.ts";
 
@@ -11,26 +11,7 @@ function importSource(source: PartListSource): void {
   const deps = catalog.deps;
   if (deps === null) return;
   const key = sourceKey(source);
-  catalogStore.setState((c) => ({
-    lists: {
-      ...c.lists,
-      [source.id]: {
-        id: source.id,
-        name: source.name,
-        state: "loading",
-        phase: "reading",
-        done: 0,
-        total: source.text.length,
-        summary: null,
-        parts: [],
-        signature: null,
-        rememberedApplied: false,
-        message: null,
-        reimporting: false,
-        sourceKey: key,
-      },
-    },
-  }));
+  catalogStore.setState((c) => ({ lists: { ...c.lists, [source.id]: loadingList(source, "reading", source.text.length) } }));
   running.get(source.id)?.cancel();
   running.set(
     source.id,
