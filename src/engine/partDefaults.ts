@@ -28,10 +28,17 @@ const HARD_MATERIAL = /(ferrite|mn.?zn|ni.?zn|nizn|mnzn)/i;
 /** Saturation character implied by a material/construction text, null when it says nothing. */
 export function saturationFromMaterial(material: string | null): SaturationCharacter | null {
   if (material === null) return null;
-  if (HARD_MATERIAL.test(material)) return "hard";
-  if (SOFT_MATERIAL.test(material)) return "soft";
-  return null;
+  // A list repeats a handful of material texts over thousands of rows: remember the answers.
+  const known = materialCache.get(material);
+  if (known !== undefined) return known;
+  const character = HARD_MATERIAL.test(material) ? "hard" : SOFT_MATERIAL.test(material) ? "soft" : null;
+  if (materialCache.size >= MATERIAL_CACHE_LIMIT) materialCache.clear();
+  materialCache.set(material, character);
+  return character;
 }
+
+const materialCache = new Map<string, SaturationCharacter | null>();
+const MATERIAL_CACHE_LIMIT = 1024;
 
 export type PartInput = Pick<Part, "partNumber" | "inductance"> & Partial<Omit<Part, "partNumber" | "inductance">>;
 
