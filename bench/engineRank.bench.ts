@@ -4,7 +4,8 @@ import { makeSpec } from "../src/engine/specDefaults.ts";
 import { joinFigures, rankFigures, screenParts, type PartFigures } from "../src/engine/screenParts.ts";
 import { Worker } from "node:worker_threads";
 import { cornerPoints } from "../src/engine/cornerPoints.ts";
-import { medianMs, random } from "./measure.ts";
+import { medianMs } from "./measure.ts";
+import { makeRandom } from "../sample-parts/generate.ts";
 
 export const benchSpec = makeSpec({
   topology: "buck",
@@ -18,7 +19,7 @@ export const benchSpec = makeSpec({
 });
 
 export function generateParts(count: number, rollOff: boolean): Part[] {
-  const rnd = random(rollOff ? 7 : 11);
+  const rnd = makeRandom(rollOff ? 7 : 11);
   const parts: Part[] = [];
   for (let i = 0; i < count; i++) {
     const inductance = 0.33e-6 * Math.pow(300, rnd());

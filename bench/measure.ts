@@ -22,15 +22,3 @@ export async function medianMs(run: () => unknown, runs = 5, warmups = 1): Promi
 export function gcAvailable(): boolean {
   return gc !== undefined;
 }
-
-/** Small deterministic generator (mulberry32), so every run ranks the same list. */
-export function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}

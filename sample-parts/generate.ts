@@ -18,7 +18,7 @@ import { fileURLToPath } from "node:url";
 const here = dirname(fileURLToPath(import.meta.url));
 
 /** mulberry32: tiny deterministic PRNG, enough for reproducible scatter. */
-function makeRandom(seed: number): () => number {
+export function makeRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;

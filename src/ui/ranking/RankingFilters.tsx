@@ -21,28 +21,8 @@ export function RankingFilters({ parts, shown, total }: { parts: readonly Part[]
       <label className="check-field">
         <input type="checkbox" checked={f.passOnly} onChange={(e) => setFilter({ passOnly: e.target.checked })} /> Passing parts only
       </label>
-      <div className="field">
-        <label htmlFor="filter-material">Construction</label>
-        <select id="filter-material" value={f.material ?? ""} onChange={(e) => setFilter({ material: e.target.value === "" ? null : e.target.value })}>
-          <option value="">All</option>
-          {materials.map((m) => (
-            <option key={m} value={m}>
-              {m}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="filter-maker">Maker</label>
-        <select id="filter-maker" value={f.maker ?? ""} onChange={(e) => setFilter({ maker: e.target.value === "" ? null : e.target.value })}>
-          <option value="">All</option>
-          {makers.map((m) => (
-            <option key={m} value={m}>
-              {m}
-            </option>
-          ))}
-        </select>
-      </div>
+      <ChoiceFilter id="filter-material" label="Construction" value={f.material} choices={materials} onChange={(material) => setFilter({ material })} />
+      <ChoiceFilter id="filter-maker" label="Maker" value={f.maker} choices={makers} onChange={(maker) => setFilter({ maker })} />
       <div className="field">
         <label htmlFor="filter-text">Search</label>
         <input id="filter-text" type="search" value={f.text} placeholder="part number, series…" onChange={(e) => setFilter({ text: e.target.value })} />
@@ -60,6 +40,23 @@ export function RankingFilters({ parts, shown, total }: { parts: readonly Part[]
           Back to rank order
         </button>
       )}
+    </div>
+  );
+}
+
+/** A select of the values a column takes, "All" meaning no filter (null). */
+function ChoiceFilter({ id, label, value, choices, onChange }: { id: string; label: string; value: string | null; choices: readonly string[]; onChange: (value: string | null) => void }) {
+  return (
+    <div className="field">
+      <label htmlFor={id}>{label}</label>
+      <select id={id} value={value ?? ""} onChange={(e) => onChange(e.target.value === "" ? null : e.target.value)}>
+        <option value="">All</option>
+        {choices.map((m) => (
+          <option key={m} value={m}>
+            {m}
+          </option>
+        ))}
+      </select>
     </div>
   );
 }
