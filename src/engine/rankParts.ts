@@ -1,15 +1,22 @@
 import type { Part, Result, Spec } from "./types.ts";
-import { evaluatePart } from "./evaluatePart.ts";
+import { evaluatePart, type PartEvaluation } from "./evaluatePart.ts";
 import { CornerSolver } from "./evaluateCorner.ts";
-import { screenParts, type Screening } from "./screenParts.ts";
+import { rankFigures, type PartFigures, type Screening } from "./screenParts.ts";
 
 /** Full results (corners, checks with reasons) in rank order for the ranks in [from, to). */
-export function rankedResults(spec: Spec, parts: readonly Part[], screening: Screening, from = 0, to = screening.count): Result[] {
+export function rankedResults(
+  spec: Spec,
+  parts: readonly Part[],
+  screening: Screening,
+  from = 0,
+  to = screening.count,
+  evaluated?: readonly PartEvaluation[],
+): Result[] {
   const solver = new CornerSolver(spec);
   const results: Result[] = [];
   for (let k = from; k < Math.min(to, screening.count); k++) {
     const index = screening.order[k]!;
-    const e = evaluatePart(spec, parts[index]!, solver);
+    const e = evaluated?.[index] ?? evaluatePart(spec, parts[index]!, solver);
     results.push({
       partNumber: e.part.partNumber,
       rank: k + 1,
@@ -28,7 +35,37 @@ export function rankedResults(spec: Spec, parts: readonly Part[], screening: Scr
   return results;
 }
 
-/** Evaluates and ranks every part against the spec, passing parts first, with full results. */
+/** The screening figures of parts already evaluated in full (the same solver, so the same numbers). */
+function figuresOf(evaluations: readonly PartEvaluation[]): PartFigures {
+  const n = evaluations.length;
+  const figures: PartFigures = {
+    status: evaluations.map((e) => e.status),
+    failures: new Uint8Array(n),
+    peak: new Float64Array(n),
+    irms: new Float64Array(n),
+    totalLoss: new Float64Array(n),
+    tempRise: new Float64Array(n),
+    minMargin: new Float64Array(n),
+    unreachable: new Uint8Array(n),
+  };
+  evaluations.forEach((e, i) => {
+    figures.failures[i] = e.failures.length;
+    figures.peak[i] = e.worst.peakMagnitude.value;
+    figures.irms[i] = e.worst.irms.value;
+    figures.totalLoss[i] = e.worst.totalLoss.value;
+    figures.tempRise[i] = e.worst.tempRise?.value ?? NaN;
+    figures.minMargin[i] = e.minMargin ?? NaN;
+    figures.unreachable[i] = e.corners.some((c) => c.unreachable) ? 1 : 0;
+  });
+  return figures;
+}
+
+/**
+ * Evaluates and ranks every part against the spec, passing parts first, with full results.
+ * Each part is evaluated once: the ranking is built from the full evaluations.
+ */
 export function rankParts(spec: Spec, parts: readonly Part[]): Result[] {
-  return rankedResults(spec, parts, screenParts(spec, parts));
+  const solver = new CornerSolver(spec);
+  const evaluations = parts.map((part) => evaluatePart(spec, part, solver));
+  return rankedResults(spec, parts, rankFigures(spec, parts, figuresOf(evaluations)), 0, parts.length, evaluations);
 }

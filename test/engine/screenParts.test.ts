@@ -4,7 +4,7 @@ import { importPartList } from "../../src/catalog/importPartList.ts";
 import { parseSpec } from "../../src/engine/parseSpec.ts";
 import { joinFigures, rankFigures, screenFigures, screenParts } from "../../src/engine/screenParts.ts";
 import { evaluatePart } from "../../src/engine/evaluatePart.ts";
-import { rankedResults } from "../../src/engine/rankParts.ts";
+import { rankedResults, rankParts } from "../../src/engine/rankParts.ts";
 import type { Spec } from "../../src/engine/types.ts";
 
 const parsed = parseSpec(JSON.parse(readFileSync("sample-parts/demo-spec.json", "utf8")));
@@ -38,5 +38,14 @@ describe("screenParts", () => {
     expect(page.map((r) => r.rank)).toEqual([11, 12, 13, 14, 15]);
     expect(page.map((r) => r.partNumber)).toEqual(Array.from(s.order.slice(10, 15), (i) => parts[i]!.partNumber));
     expect(page.find((r) => !r.pass)?.failures[0]).toMatch(/at Vin/);
+  });
+});
+
+describe("rankParts", () => {
+  it("rankParts gives the same order and scores as screenParts (it ranks from the full evaluations)", () => {
+    const s = screenParts(spec, parts);
+    const results = rankParts(spec, parts);
+    expect(results.map((r) => r.partNumber)).toEqual(Array.from(s.order, (i) => parts[i]!.partNumber));
+    expect(results.map((r) => r.score)).toEqual(Array.from(s.order, (i) => s.score[i]!));
   });
 });
