@@ -17,6 +17,13 @@ export interface FluxCurve {
   squareIntegral(lambda: number): number;
   /** Flux linkage at current i. */
   flux(current: number): number;
+  /** di/dλ at flux linkage λ (the inverse of the differential inductance there). */
+  currentSlope(lambda: number): number;
+  /**
+   * Flux linkage at the centre of a ramp of swing Δλ whose mean current is i, to second order:
+   * mean ≈ i(λc) + i''(λc)·Δλ²/24 (Taylor expansion about the centre).
+   */
+  rampCentre(current: number, swing: number): number;
   /** Differential inductance dλ/di at current i. */
   inductanceAt(current: number): number;
   /** Largest |λ| the curve models; beyond it the core is driven past saturation. */
@@ -53,12 +60,22 @@ export class ConstantInductance implements FluxCurve {
   flux(current: number): number {
     return current * this.inductance;
   }
+  currentSlope(): number {
+    return this.inverseL;
+  }
+  rampCentre(current: number): number {
+    return current * this.inductance;
+  }
   inductanceAt(): number {
     return this.inductance;
   }
 }
 
-/** Normalised tables of one roll-off exponent, on a uniform grid in x. */
+/**
+ * Normalised tables of one roll-off exponent, on a uniform grid in x. The evaluations read
+ * `packed` copies that hold each node's values side by side ([x, dx/dy, g, h] per node; [y, dx/dy]
+ * for the grid in x), so that a lookup touches one or two cache lines rather than one per array.
+ */
 interface RollOffTable {
   n: number;
   step: number;
@@ -69,6 +86,10 @@ interface RollOffTable {
   slope: Float64Array;
   g: Float64Array;
   h: Float64Array;
+  /** [x, slope, g, h] of node k at 4k. */
+  packed: Float64Array;
+  /** [y, slope] of node k at 2k. */
+  packedInX: Float64Array;
   yMax: number;
   xMax: number;
   /** bucket[b] = last node with y ≤ b·yMax/buckets, to start the interval search. */
@@ -78,7 +99,16 @@ interface RollOffTable {
    * The same law on a uniform grid in y over [0, uniformMax], where the slope dx/dy stays below
    * UNIFORM_SLOPE_LIMIT: a lookup there is one index computation instead of a search.
    */
-  uniform: { x: Float64Array; slope: Float64Array; g: Float64Array; h: Float64Array; step: number; inverseStep: number; yLimit: number };
+  uniform: { packed: Float64Array; step: number; inverseStep: number; yLimit: number };
+}
+
+/** Node values side by side: out[stride·k + j] = columns[j][k]. */
+function pack(columns: readonly Float64Array[]): Float64Array {
+  const stride = columns.length;
+  const nodes = columns[0]!.length;
+  const out = new Float64Array(stride * nodes);
+  for (let k = 0; k < nodes; k++) for (let j = 0; j < stride; j++) out[stride * k + j] = columns[j]![k]!;
+  return out;
 }
 
 const TABLE_NODES = 4097;
@@ -132,7 +162,7 @@ function buildTable(n: number): RollOffTable {
     bucket[b] = k;
   }
   const base = { n, step, nodes, x, y, slope, g, h, yMax, xMax, bucket, bucketScale: BUCKETS / yMax };
-  return { ...base, uniform: buildUniformGrid(base) };
+  return { ...base, packed: pack([x, slope, g, h]), packedInX: pack([y, slope]), uniform: buildUniformGrid(base) };
 }
 
 /** ∫ from a to b of s^p/(1 + s^n) ds by 5-point Gauss–Legendre (b − a at most one table step). */
@@ -147,7 +177,7 @@ function segmentIntegral(a: number, b: number, n: number, p: number): number {
   return sum * half;
 }
 
-function buildUniformGrid(t: Omit<RollOffTable, "uniform">): RollOffTable["uniform"] {
+function buildUniformGrid(t: Omit<RollOffTable, "uniform" | "packed" | "packedInX">): RollOffTable["uniform"] {
   const xLimit = Math.min(t.xMax, Math.pow(UNIFORM_SLOPE_LIMIT - 1, 1 / t.n));
   // y at xLimit, from the node below it.
   const kLimit = Math.min(t.nodes - 2, Math.floor(xLimit / t.step));
@@ -172,7 +202,7 @@ function buildUniformGrid(t: Omit<RollOffTable, "uniform">): RollOffTable["unifo
     g[j] = t.g[k]! + segmentIntegral(t.x[k]!, xj, t.n, 1);
     h[j] = t.h[k]! + segmentIntegral(t.x[k]!, xj, t.n, 2);
   }
-  return { x, slope, g, h, step, inverseStep: 1 / step, yLimit };
+  return { packed: pack([x, slope, g, h]), step, inverseStep: 1 / step, yLimit };
 }
 
 const tableCache = new Map<number, RollOffTable>();
@@ -215,23 +245,17 @@ export class RollOffCurve implements FluxCurve {
   private inverseLambdaScale = 0;
   private gScale = 0;
   private hScale = 0;
-  // Interval found by the last lookup, shared by the evaluations at the same λ.
+  // Interval found by the last lookup, shared by the evaluations at the same λ: the offset of
+  // its lower node in the packed grid the lookup used (uniform or searched).
   private lastY = NaN;
-  private lastK = 0;
+  private lastOffset = 0;
   private lastT = 0;
   private lastHy = 0;
-  // Arrays of the grid the last lookup used (uniform or searched).
-  private gridX: Float64Array;
-  private gridSlope: Float64Array;
-  private gridG: Float64Array;
-  private gridH: Float64Array;
+  private grid: Float64Array;
 
   constructor(inductance: number, ik: number, n: number) {
     this.table = rollOffTable(n);
-    this.gridX = this.table.x;
-    this.gridSlope = this.table.slope;
-    this.gridG = this.table.g;
-    this.gridH = this.table.h;
+    this.grid = this.table.packed;
     this.set(inductance, ik, n);
   }
 
@@ -258,19 +282,13 @@ export class RollOffCurve implements FluxCurve {
       const position = yAbs * u.inverseStep;
       const k = Math.floor(position);
       this.lastY = yAbs;
-      this.lastK = k;
+      this.lastOffset = 4 * k;
       this.lastHy = u.step;
       this.lastT = position - k;
-      this.gridX = u.x;
-      this.gridSlope = u.slope;
-      this.gridG = u.g;
-      this.gridH = u.h;
+      this.grid = u.packed;
       return;
     }
-    this.gridX = t.x;
-    this.gridSlope = t.slope;
-    this.gridG = t.g;
-    this.gridH = t.h;
+    this.grid = t.packed;
     const yc = yAbs >= t.yMax ? t.yMax : yAbs;
     const b = Math.floor(yc * t.bucketScale);
     let lo = t.bucket[b >= BUCKETS ? BUCKETS : b]!;
@@ -283,7 +301,7 @@ export class RollOffCurve implements FluxCurve {
     }
     const hy = t.y[lo + 1]! - t.y[lo]!;
     this.lastY = yAbs;
-    this.lastK = lo;
+    this.lastOffset = 4 * lo;
     this.lastHy = hy;
     this.lastT = hy > 0 ? (yc - t.y[lo]!) / hy : 0;
   }
@@ -299,41 +317,62 @@ export class RollOffCurve implements FluxCurve {
     );
   }
 
-  private xAt(yAbs: number): number {
-    this.locate(yAbs);
-    const k = this.lastK;
-    const x = this.gridX;
-    const slope = this.gridSlope;
-    return this.hermite(x[k]!, x[k + 1]!, slope[k]!, slope[k + 1]!);
-  }
+  // In the packed grid node k holds x at 4k, dx/dy at 4k + 1, g at 4k + 2 and h at 4k + 3.
 
   current(lambda: number): number {
     const y = lambda * this.inverseLambdaScale;
-    const x = this.xAt(y < 0 ? -y : y);
+    this.locate(y < 0 ? -y : y);
+    const o = this.lastOffset;
+    const d = this.grid;
+    const x = this.hermite(d[o]!, d[o + 4]!, d[o + 1]!, d[o + 5]!);
     return (y < 0 ? -x : x) * this.ik;
+  }
+
+  currentSlope(lambda: number): number {
+    const y = lambda * this.inverseLambdaScale;
+    this.locate(y < 0 ? -y : y);
+    const o = this.lastOffset;
+    const d = this.grid;
+    const s = this.lastT;
+    // Derivative of the cubic Hermite that current() evaluates; dx/dy is even in y.
+    const dxdy = ((6 * s * s - 6 * s) * (d[o]! - d[o + 4]!)) / this.lastHy + (3 * s * s - 4 * s + 1) * d[o + 1]! + (3 * s * s - 2 * s) * d[o + 5]!;
+    return dxdy * this.ik * this.inverseLambdaScale;
+  }
+
+  rampCentre(current: number, swing: number): number {
+    const centre = this.flux(current);
+    const x = Math.abs(current) / this.ik;
+    if (x === 0 || x >= this.table.xMax) return centre;
+    // i' = (1 + x^n)/L0 and i'' = n·x^(n−1)·(1 + x^n)/(L0²·Ik), so the centre moves by
+    // −(i''/i')·Δλ²/24 = −n·x^(n−1)·Δλ²/(24·L0·Ik). x^n comes from the tabulated slope 1 + x^n.
+    const t = this.table;
+    const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
+    const f = (x - k * t.step) / t.step;
+    const xn = (1 - f) * t.packedInX[2 * k + 1]! + f * t.packedInX[2 * k + 3]! - 1;
+    let shift = (((this.n * xn) / x) * swing * swing * this.inverseLambdaScale) / 24;
+    // Far past the knee the expansion overshoots; Newton finishes from within half a swing.
+    if (shift > swing / 2) shift = swing / 2;
+    return current < 0 ? centre + shift : centre - shift;
   }
 
   currentIntegral(lambda: number): number {
     const y = lambda * this.inverseLambdaScale;
-    const ya = y < 0 ? -y : y;
-    this.locate(ya);
-    const k = this.lastK;
-    const g = this.gridG;
-    const x = this.gridX;
+    this.locate(y < 0 ? -y : y);
+    const o = this.lastOffset;
+    const d = this.grid;
     // g' = x; g is even in y.
-    return this.hermite(g[k]!, g[k + 1]!, x[k]!, x[k + 1]!) * this.gScale;
+    return this.hermite(d[o + 2]!, d[o + 6]!, d[o]!, d[o + 4]!) * this.gScale;
   }
 
   squareIntegral(lambda: number): number {
     const y = lambda * this.inverseLambdaScale;
-    const ya = y < 0 ? -y : y;
-    this.locate(ya);
-    const k = this.lastK;
-    const x0 = this.gridX[k]!;
-    const x1 = this.gridX[k + 1]!;
-    const h = this.gridH;
+    this.locate(y < 0 ? -y : y);
+    const o = this.lastOffset;
+    const d = this.grid;
+    const x0 = d[o]!;
+    const x1 = d[o + 4]!;
     // h' = x²; h is odd in y.
-    const v = this.hermite(h[k]!, h[k + 1]!, x0 * x0, x1 * x1) * this.hScale;
+    const v = this.hermite(d[o + 3]!, d[o + 7]!, x0 * x0, x1 * x1) * this.hScale;
     return y < 0 ? -v : v;
   }
 
@@ -342,15 +381,16 @@ export class RollOffCurve implements FluxCurve {
     const t = this.table;
     if (x >= t.xMax) return Math.sign(current) * this.lambdaLimit;
     const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
-    const s = (x - t.x[k]!) / t.step;
+    const s = (x - k * t.step) / t.step;
+    const d = t.packedInX;
     // Hermite in x with dy/dx = 1/slope.
     const s2 = s * s;
     const s3 = s2 * s;
     const y =
-      (2 * s3 - 3 * s2 + 1) * t.y[k]! +
-      (s3 - 2 * s2 + s) * t.step / t.slope[k]! +
-      (-2 * s3 + 3 * s2) * t.y[k + 1]! +
-      (s3 - s2) * t.step / t.slope[k + 1]!;
+      (2 * s3 - 3 * s2 + 1) * d[2 * k]! +
+      ((s3 - 2 * s2 + s) * t.step) / d[2 * k + 1]! +
+      (-2 * s3 + 3 * s2) * d[2 * k + 2]! +
+      ((s3 - s2) * t.step) / d[2 * k + 3]!;
     return Math.sign(current) * y * this.lambdaScale;
   }
 

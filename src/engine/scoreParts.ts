@@ -1,61 +1,72 @@
 import type { Weights } from "./types.ts";
 
-export interface ScoreInputs {
+/** The figures a score is built from, one entry per part; NaN where a figure is unknown. */
+export interface ScoreColumns {
   /** Worst-case total loss, W. */
-  loss: number | null;
+  loss: ArrayLike<number>;
   /** Length × width, m². */
-  footprint: number | null;
-  height: number | null;
-  price: number | null;
+  footprint: ArrayLike<number>;
+  height: ArrayLike<number>;
+  price: ArrayLike<number>;
   /** Smallest current margin, fraction. */
-  margin: number | null;
+  margin: ArrayLike<number>;
 }
 
 /** Margins above this add nothing to the score: 100 % headroom is already ample. */
 export const MARGIN_CAP = 1;
 
-function bestOf(values: (number | null)[], reference: boolean[], smallest: boolean): number | null {
-  let best: number | null = null;
-  values.forEach((v, i) => {
-    if (!reference[i] || v === null || !Number.isFinite(v)) return;
-    if (best === null || (smallest ? v < best : v > best)) best = v;
-  });
+/** Smallest (or largest) finite value among the reference parts, NaN when there is none. */
+function bestOf(values: ArrayLike<number>, reference: ArrayLike<number>, smallest: boolean, clamp = false): number {
+  let best = NaN;
+  for (let i = 0; i < values.length; i++) {
+    if (reference[i] !== 1) continue;
+    let v = values[i]!;
+    if (!Number.isFinite(v)) continue;
+    if (clamp) v = clampMargin(v);
+    if (Number.isNaN(best) || (smallest ? v < best : v > best)) best = v;
+  }
   return best;
 }
 
+function clampMargin(m: number): number {
+  return Math.min(Math.max(m, 0), MARGIN_CAP);
+}
+
 /** Cost figure relative to the best: best/x in (0, 1], 0 when unknown. */
-function costShare(x: number | null, best: number | null): number {
-  if (x === null || !Number.isFinite(x) || best === null) return 0;
+function costShare(x: number, best: number): number {
+  if (!Number.isFinite(x) || Number.isNaN(best)) return 0;
   if (x <= best || x <= 0) return 1;
   return best <= 0 ? 0 : best / x;
 }
 
 /**
  * Score 0–100 (higher is better): the weighted mean of each figure relative to the best value
- * among the reference parts (the passing ones, or all when none pass). Cost figures score best/x;
- * the margin scores min(m, 1)/best. A missing figure scores 0 for that term, so missing data
- * never helps a part.
+ * among the reference parts (reference[i] = 1: the passing ones, or all when none pass). Cost
+ * figures score best/x; the margin scores min(m, 1)/best. A missing figure scores 0 for that
+ * term, so missing data never helps a part.
  */
-export function scoreParts(items: ScoreInputs[], reference: boolean[], weights: Weights): number[] {
-  const margins = items.map((it) => (it.margin === null ? null : Math.min(Math.max(it.margin, 0), MARGIN_CAP)));
-  const best = {
-    loss: bestOf(items.map((it) => it.loss), reference, true),
-    footprint: bestOf(items.map((it) => it.footprint), reference, true),
-    height: bestOf(items.map((it) => it.height), reference, true),
-    price: bestOf(items.map((it) => it.price), reference, true),
-    margin: bestOf(margins, reference, false),
-  };
+export function scoreParts(columns: ScoreColumns, reference: ArrayLike<number>, weights: Weights): Float64Array {
+  const n = columns.loss.length;
+  const scores = new Float64Array(n);
   const total = weights.loss + weights.footprint + weights.height + weights.price + weights.margin;
-  if (!(total > 0)) return items.map(() => 0);
-  return items.map((it, i) => {
-    const m = margins[i] ?? null;
-    const marginShare = m === null || best.margin === null ? 0 : best.margin <= 0 ? (m >= best.margin ? 1 : 0) : Math.min(1, m / best.margin);
+  if (!(total > 0)) return scores;
+  const bestLoss = bestOf(columns.loss, reference, true);
+  const bestFootprint = bestOf(columns.footprint, reference, true);
+  const bestHeight = bestOf(columns.height, reference, true);
+  const bestPrice = bestOf(columns.price, reference, true);
+  const bestMargin = bestOf(columns.margin, reference, false, true);
+  for (let i = 0; i < n; i++) {
+    const raw = columns.margin[i]!;
+    const m = Number.isFinite(raw) ? clampMargin(raw) : NaN;
+    const marginShare =
+      Number.isNaN(m) || Number.isNaN(bestMargin) ? 0 : bestMargin <= 0 ? (m >= bestMargin ? 1 : 0) : Math.min(1, m / bestMargin);
     const sum =
-      weights.loss * costShare(it.loss, best.loss) +
-      weights.footprint * costShare(it.footprint, best.footprint) +
-      weights.height * costShare(it.height, best.height) +
-      weights.price * costShare(it.price, best.price) +
+      weights.loss * costShare(columns.loss[i]!, bestLoss) +
+      weights.footprint * costShare(columns.footprint[i]!, bestFootprint) +
+      weights.height * costShare(columns.height[i]!, bestHeight) +
+      weights.price * costShare(columns.price[i]!, bestPrice) +
       weights.margin * marginShare;
-    return (100 * sum) / total;
-  });
+    scores[i] = (100 * sum) / total;
+  }
+  return scores;
 }

@@ -169,30 +169,32 @@ export function joinFigures(slices: readonly PartFigures[]): PartFigures {
 /** Scores, Pareto flags and rank order of a whole list from its figures. */
 export function rankFigures(spec: Spec, parts: readonly Part[], figures: PartFigures): Screening {
   const { status, totalLoss, minMargin, unreachable, failures } = figures;
-  const anyPass = status.some((s) => s === "pass");
-  const reference = status.map((s) => (anyPass ? s === "pass" : true));
-  const known = (x: number) => (Number.isFinite(x) ? x : null);
-  const score = Float64Array.from(
-    scoreParts(
-      parts.map((part, i) => ({
-        // A part that cannot reach the output at some corner has no meaningful loss figure.
-        loss: unreachable[i] ? null : known(totalLoss[i]!),
-        footprint: part.length !== null && part.width !== null ? part.length * part.width : null,
-        height: part.height,
-        price: part.price,
-        margin: known(minMargin[i]!),
-      })),
-      reference,
-      spec.weights,
-    ),
-  );
+  const n = parts.length;
+  const anyPass = status.includes("pass");
+  const reference = new Uint8Array(n);
+  const loss = new Float64Array(n);
+  const footprint = new Float64Array(n);
+  const height = new Float64Array(n);
+  const price = new Float64Array(n);
   // The trade-off front is drawn among the parts that did not fail.
-  const front = paretoFront(
-    parts.map((_, i) => (status[i] !== "fail" ? known(totalLoss[i]!) : null)),
-    parts.map((part, i) => (status[i] !== "fail" ? volume(part) : null)),
-  );
+  const frontLoss = new Float64Array(n);
+  const frontVolume = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const part = parts[i]!;
+    reference[i] = !anyPass || status[i] === "pass" ? 1 : 0;
+    // A part that cannot reach the output at some corner has no meaningful loss figure.
+    loss[i] = unreachable[i] ? NaN : totalLoss[i]!;
+    footprint[i] = part.length !== null && part.width !== null ? part.length * part.width : NaN;
+    height[i] = part.height ?? NaN;
+    price[i] = part.price ?? NaN;
+    const counted = status[i] !== "fail";
+    frontLoss[i] = counted ? totalLoss[i]! : NaN;
+    frontVolume[i] = counted ? (volume(part) ?? NaN) : NaN;
+  }
+  const score = scoreParts({ loss, footprint, height, price, margin: minMargin }, reference, spec.weights);
+  const front = paretoFront(frontLoss, frontVolume);
   const order = rankOrder(status, score, failures);
-  return { count: parts.length, ...figures, score, pareto: Uint8Array.from(front, (f) => (f ? 1 : 0)), order };
+  return { count: n, ...figures, score, pareto: Uint8Array.from(front, (f) => (f ? 1 : 0)), order };
 }
 
 /** Evaluates every part at every corner and ranks them. */

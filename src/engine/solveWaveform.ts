@@ -93,8 +93,14 @@ interface Scratch {
   duty: number;
   il: number;
   beyond: boolean;
+  /** The continuous ramp found by valleyFlux: λ at its ends, i and ∫i²dλ there. */
+  lambda0: number;
+  i0: number;
+  i1: number;
+  h0: number;
+  h1: number;
 }
-const scratch: Scratch = { v: { on: 0, off: 0 }, duty: 0, il: 0, beyond: false };
+const scratch: Scratch = { v: { on: 0, off: 0 }, duty: 0, il: 0, beyond: false, lambda0: 0, i0: 0, i1: 0, h0: 0, h1: 0 };
 
 /**
  * Duty and average inductor current in continuous conduction: volt-second balance
@@ -125,42 +131,72 @@ function continuousDuty(p: OperatingPoint, s: Scratch): boolean {
 /**
  * λ0 so that the mean current over the ramp λ0 → λ0 + Δλ equals il. Time is linear in λ on
  * each ramp and both ramps span the same λ range, so mean = (G(λ0+Δλ) − G(λ0))/Δλ; Newton with
- * the exact derivative (i(λ0+Δλ) − i(λ0))/Δλ. Sets s.beyond when the curve's end is reached.
+ * the exact derivative (i(λ0+Δλ) − i(λ0))/Δλ from a second-order first guess. Leaves λ0 and the
+ * current and ∫i²dλ at both ends in the scratch; sets s.beyond when the curve's end is reached.
  */
-function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): number {
+function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): void {
   s.beyond = false;
   // Constant L: mean = (λ0 + λ0 + Δλ)/(2L), so λ0 = L·IL − Δλ/2 exactly (the textbook valley).
-  if (curve.constant) return curve.inductance * il - swing / 2;
+  let lambda0 = curve.rampCentre(il, swing) - swing / 2;
+  if (curve.constant) {
+    rampEnds(curve, lambda0, swing, s);
+    return;
+  }
   const limit = curve.lambdaLimit;
-  let lambda0 = curve.flux(il) - swing / 2;
   const scale = Math.max(Math.abs(il), 1e-30);
   for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
-    s.beyond = false;
-    if (lambda0 + swing > limit) {
-      lambda0 = limit - swing;
-      s.beyond = true;
-    }
-    if (lambda0 < -limit) {
-      lambda0 = -limit;
-      s.beyond = true;
-    }
+    // Which end was clamped is kept as a flag: limit − Δλ + Δλ need not round back to limit.
+    const atTop = lambda0 + swing > limit;
+    const atBottom = lambda0 < -limit;
+    if (atTop) lambda0 = limit - swing;
+    if (atBottom) lambda0 = -limit;
+    s.beyond = atTop || atBottom;
     const lambda1 = lambda0 + swing;
+    // Evaluations at the same λ in a row share one table lookup.
     const g1 = curve.currentIntegral(lambda1);
     const i1 = curve.current(lambda1);
+    const h1 = curve.squareIntegral(lambda1);
+    const d1 = curve.currentSlope(lambda1);
     const g0 = curve.currentIntegral(lambda0);
     const i0 = curve.current(lambda0);
+    const h0 = curve.squareIntegral(lambda0);
+    const d0 = curve.currentSlope(lambda0);
+    s.lambda0 = lambda0;
+    s.i0 = i0;
+    s.i1 = i1;
+    s.h0 = h0;
+    s.h1 = h1;
     const error = (g1 - g0) / swing - il;
-    if (Math.abs(error) <= RELATIVE_TOLERANCE * scale) break;
+    if (Math.abs(error) <= RELATIVE_TOLERANCE * scale) return;
     // Clamped at the end of the curve and the root lies further out: the core is past saturation.
-    if (s.beyond && ((lambda1 >= limit && error < 0) || (lambda0 <= -limit && error > 0))) break;
+    if ((atTop && error < 0) || (atBottom && error > 0)) return;
     const slope = (i1 - i0) / swing;
-    if (!(slope > 0)) break;
+    if (!(slope > 0)) return;
     const step = error / slope;
-    lambda0 -= step;
-    // Newton converges quadratically: once the step is this small the remaining error is far smaller.
-    if (Math.abs(step) <= STEP_TOLERANCE * (Math.abs(lambda0) + swing)) break;
+    const next = lambda0 - step;
+    // Newton converges quadratically: once the step is this small the error left is of the
+    // order of its square, and so is that of carrying the end values to the new λ0 along their
+    // tangents (i' from the curve, (∫i²)' = i²), which saves evaluating them again.
+    if (Math.abs(step) <= STEP_TOLERANCE * (Math.abs(next) + swing) && next + swing <= limit && next >= -limit) {
+      s.lambda0 = next;
+      s.i1 = i1 - step * d1;
+      s.i0 = i0 - step * d0;
+      s.h1 = h1 - step * i1 * i1;
+      s.h0 = h0 - step * i0 * i0;
+      return;
+    }
+    lambda0 = next;
   }
-  return lambda0;
+}
+
+/** The end values of the ramp from λ0 over Δλ, evaluated on the curve. */
+function rampEnds(curve: FluxCurve, lambda0: number, swing: number, s: Scratch): void {
+  const lambda1 = lambda0 + swing;
+  s.lambda0 = lambda0;
+  s.i1 = curve.current(lambda1);
+  s.h1 = curve.squareIntegral(lambda1);
+  s.i0 = curve.current(lambda0);
+  s.h0 = curve.squareIntegral(lambda0);
 }
 
 /** Peak flux p with G(p) = target (G is convex and increasing for p > 0; Newton with G' = i). */
@@ -191,14 +227,12 @@ function peakFluxForIntegral(curve: FluxCurve, target: number, s: Scratch): numb
 
 function continuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
   const swing = (s.v.on * s.duty) / p.fsw;
-  const lambda0 = valleyFlux(curve, s.il, swing, s);
-  const lambda1 = lambda0 + swing;
-  // Evaluations at the same λ in a row share one table lookup.
-  const ipk = curve.current(lambda1);
-  const square1 = curve.squareIntegral(lambda1);
-  const ivalley = curve.current(lambda0);
+  valleyFlux(curve, s.il, swing, s);
+  const lambda0 = s.lambda0;
+  const ipk = s.i1;
+  const ivalley = s.i0;
   const ripple = ipk - ivalley;
-  out.meanSquare = (square1 - curve.squareIntegral(lambda0)) / swing;
+  out.meanSquare = (s.h1 - s.h0) / swing;
   out.mode = ivalley > BCM_TOLERANCE * ripple ? "ccm" : ivalley >= -BCM_TOLERANCE * ripple ? "bcm" : "forced-continuous";
   out.duty = s.duty;
   out.d2 = 1 - s.duty;

@@ -1,5 +1,6 @@
 import type { Part } from "./types.ts";
 import { COPPER_ALPHA20, copperResistance } from "./copper.ts";
+import { powerTable } from "./powerTable.ts";
 
 /** Common practice: makers rate heating current in a 25 °C ambient. */
 export const RATING_AMBIENT = 25;
@@ -65,11 +66,12 @@ export interface ThermalBalance {
 export function settleTemperature(b: ThermalBalance): number {
   const slope = (b.copperLossAtReference * COPPER_ALPHA20) / (1 + COPPER_ALPHA20 * (b.referenceTemperature - 20));
   const base = b.copperLossAtReference - slope * b.referenceTemperature + b.otherLoss;
+  const power = powerTable(b.exponent);
+  const inverseRated = 1 / b.ratedPower;
   let t = b.start;
   for (let iteration = 0; iteration < 50; iteration++) {
     const p = base + slope * t;
-    // exp(k·ln x) rather than Math.pow: the same value, about half the time on V8.
-    const rise = p > 0 ? b.ratedRise * Math.exp(b.exponent * Math.log(p / b.ratedPower)) : 0;
+    const rise = p > 0 ? b.ratedRise * power.pow(p * inverseRated) : 0;
     const dh = 1 - (p > 0 ? (b.exponent * rise * slope) / p : 0);
     if (!(dh > 0)) return RUNAWAY_TEMPERATURE;
     const step = (t - b.ambient - rise) / dh;

@@ -38,11 +38,8 @@ describe("rankParts", () => {
 describe("scoreParts", () => {
   it("scoreParts gives 100 to a part best on every figure and 0 for missing figures", () => {
     const scores = scoreParts(
-      [
-        { loss: 0.1, footprint: 1, height: 1, price: 1, margin: 0.5 },
-        { loss: null, footprint: null, height: null, price: null, margin: null },
-      ],
-      [true, true],
+      { loss: [0.1, NaN], footprint: [1, NaN], height: [1, NaN], price: [1, NaN], margin: [0.5, NaN] },
+      [1, 1],
       DEFAULT_WEIGHTS,
     );
     expect(scores[0]).toBeCloseTo(100, 10);
