@@ -1,7 +1,7 @@
 import type { CornerPoint, CornerResult, Part, Spec } from "./types.ts";
 import { ConstantInductance, type FluxCurve, RollOffCurve, knee } from "./fluxCurve.ts";
 import { emptySolution, type OperatingPoint, solveWaveform, type WaveformSolution } from "./solveWaveform.ts";
-import { copperResistance } from "./copper.ts";
+import { COPPER_ALPHA20, copperResistance } from "./copper.ts";
 import { RUNAWAY_TEMPERATURE, type ThermalBalance, isatAtTemperature, ratedHeatingPower, settleTemperature } from "./thermal.ts";
 import { idealDuty, inductorCurrentCcm } from "./segmentVoltages.ts";
 import { igseTwoRamp } from "./coreLoss.ts";
@@ -20,6 +20,8 @@ export interface PreparedPart {
   part: Part;
   /** DCR used for losses, Ω at part.dcrTemp. */
   dcrRef: number | null;
+  /** The same winding at 20 °C, where IEC 60028 states α20: R(T) = dcr20·(1 + α20·(T − 20)). */
+  dcr20: number | null;
   ratedPower: number | null;
   /** Knee current of the roll-off law at 25 °C, null for constant L. */
   knee25: number | null;
@@ -31,12 +33,19 @@ export function lossDcr(part: Part): number | null {
 }
 
 export function preparePart(part: Part): PreparedPart {
+  const dcrRef = lossDcr(part);
   return {
     part,
-    dcrRef: lossDcr(part),
+    dcrRef,
+    dcr20: dcrRef === null ? null : copperResistance(dcrRef, part.dcrTemp, 20),
     ratedPower: ratedHeatingPower(part),
     knee25: part.isat === null ? null : knee(part.isat, part.isatDrop, part.rollOffExponent),
   };
+}
+
+/** Winding resistance at tC from its value at 20 °C (IEC 60028, α20 = 0.00393 /K). */
+function resistanceAt(dcr20: number, tC: number): number {
+  return dcr20 * (1 + COPPER_ALPHA20 * (tC - 20));
 }
 
 /** Flux curve of a part at one inductance corner and temperature (constant L when Isat is unknown). */
@@ -118,8 +127,7 @@ export class CornerSolver {
     };
     this.balance = {
       ambient: spec.ambient,
-      copperLossAtReference: 0,
-      referenceTemperature: 25,
+      copperLossAt20: 0,
       otherLoss: 0,
       ratedPower: 1,
       ratedRise: 40,
@@ -144,9 +152,8 @@ export class CornerSolver {
    */
   solve(prepared: PreparedPart, vin: number, iout: number, inductance: number): void {
     const { spec, op, balance } = this;
-    const { part, dcrRef, ratedPower } = prepared;
-    const thermal = ratedPower !== null && dcrRef !== null;
-    balance.referenceTemperature = part.dcrTemp;
+    const { part, dcr20, ratedPower } = prepared;
+    const thermal = ratedPower !== null && dcr20 !== null;
     balance.ratedPower = ratedPower ?? 1;
     balance.ratedRise = part.irmsRise;
     balance.otherLoss = 0;
@@ -158,28 +165,28 @@ export class CornerSolver {
     } else if (thermal) {
       // Start from the rise that the DC part of the inductor current alone would cause.
       const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
-      balance.copperLossAtReference = il * il * dcrRef;
+      balance.copperLossAt20 = il * il * dcr20;
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
     }
     let isatSolved = isatAtTemperature(part, temperature);
     this.setCurve(prepared, inductance, isatSolved);
     op.vin = vin;
     op.iout = iout;
-    op.drops.dcr = dcrRef === null ? 0 : copperResistance(dcrRef, part.dcrTemp, temperature);
+    op.drops.dcr = dcr20 === null ? 0 : resistanceAt(dcr20, temperature);
     const solution = solveWaveform(op, this.curve, this.solution);
-    let dcrHot = dcrRef === null ? null : op.drops.dcr;
+    let dcrHot = dcr20 === null ? null : op.drops.dcr;
     let core = coreLossOf(part, solution, spec.fsw);
     // Settle the temperature for this waveform's RMS current and core loss (copper loss ∝ R(T));
     // solve again only while that temperature still moves the winding drop or Isat noticeably.
     for (let iteration = 0; thermal && !solution.unreachable && iteration < THERMAL_ITERATIONS; iteration++) {
-      balance.copperLossAtReference = windingLoss(solution, dcrRef, part.acFactor);
+      balance.copperLossAt20 = windingLoss(solution, dcr20, part.acFactor);
       balance.otherLoss = core ?? 0;
       balance.start = temperature;
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
-      dcrHot = copperResistance(dcrRef, part.dcrTemp, temperature);
+      dcrHot = resistanceAt(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
-      const isatNow = isatAtTemperature(part, temperature);
-      const isatShift = isatNow === null || isatSolved === null ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
+      const isatNow = isatSolved === null ? null : isatAtTemperature(part, temperature);
+      const isatShift = isatNow === null || isatSolved === null || isatNow === isatSolved ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
       const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
       if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
       if (isatShift > 0) {

@@ -26,6 +26,15 @@ export interface FluxCurve {
   rampCentre(current: number, swing: number): number;
   /** Differential inductance dλ/di at current i. */
   inductanceAt(current: number): number;
+  /**
+   * Evaluates current, currentIntegral, squareIntegral and currentSlope at λ together (one
+   * lookup) into the four sample fields: the solver's Newton steps need all of them at once.
+   */
+  sample(lambda: number): void;
+  readonly sampleCurrent: number;
+  readonly sampleIntegral: number;
+  readonly sampleSquare: number;
+  readonly sampleSlope: number;
   /** Largest |λ| the curve models; beyond it the core is driven past saturation. */
   readonly lambdaLimit: number;
   /** Zero-bias inductance L0, H. */
@@ -39,9 +48,20 @@ export class ConstantInductance implements FluxCurve {
   readonly lambdaLimit = Infinity;
   readonly constant = true;
   inductance = 0;
+  sampleCurrent = 0;
+  sampleIntegral = 0;
+  sampleSquare = 0;
+  sampleSlope = 0;
   private inverseL = 0;
   constructor(inductance: number) {
     this.set(inductance);
+  }
+  sample(lambda: number): void {
+    const i = lambda * this.inverseL;
+    this.sampleCurrent = i;
+    this.sampleIntegral = 0.5 * lambda * i;
+    this.sampleSquare = (lambda * i * i) / 3;
+    this.sampleSlope = this.inverseL;
   }
   set(inductance: number): this {
     this.inductance = inductance;
@@ -240,6 +260,10 @@ export class RollOffCurve implements FluxCurve {
   inductance = 0;
   ik = 0;
   n = 0;
+  sampleCurrent = 0;
+  sampleIntegral = 0;
+  sampleSquare = 0;
+  sampleSlope = 0;
   private table: RollOffTable;
   private lambdaScale = 0;
   private inverseLambdaScale = 0;
@@ -252,6 +276,9 @@ export class RollOffCurve implements FluxCurve {
   private lastT = 0;
   private lastHy = 0;
   private grid: Float64Array;
+  // The last flux() answer: the mode test and the valley's first guess both ask for λ(IL).
+  private lastFluxCurrent = NaN;
+  private lastFlux = 0;
 
   constructor(inductance: number, ik: number, n: number) {
     this.table = rollOffTable(n);
@@ -270,6 +297,7 @@ export class RollOffCurve implements FluxCurve {
     this.hScale = inductance * ik * ik * ik;
     this.lambdaLimit = this.table.yMax * this.lambdaScale;
     this.lastY = NaN;
+    this.lastFluxCurrent = NaN;
     return this;
   }
 
@@ -318,6 +346,36 @@ export class RollOffCurve implements FluxCurve {
   }
 
   // In the packed grid node k holds x at 4k, dx/dy at 4k + 1, g at 4k + 2 and h at 4k + 3.
+
+  sample(lambda: number): void {
+    const y = lambda * this.inverseLambdaScale;
+    const negative = y < 0;
+    this.locate(negative ? -y : y);
+    const o = this.lastOffset;
+    const d = this.grid;
+    const s = this.lastT;
+    const hy = this.lastHy;
+    const s2 = s * s;
+    const s3 = s2 * s;
+    // The cubic Hermite basis, shared by the four quantities (g' = x, h' = x²).
+    const b00 = 2 * s3 - 3 * s2 + 1;
+    const b10 = (s3 - 2 * s2 + s) * hy;
+    const b01 = -2 * s3 + 3 * s2;
+    const b11 = (s3 - s2) * hy;
+    const x0 = d[o]!;
+    const m0 = d[o + 1]!;
+    const x1 = d[o + 4]!;
+    const m1 = d[o + 5]!;
+    const x = b00 * x0 + b10 * m0 + b01 * x1 + b11 * m1;
+    const g = b00 * d[o + 2]! + b10 * x0 + b01 * d[o + 6]! + b11 * x1;
+    const h = b00 * d[o + 3]! + b10 * x0 * x0 + b01 * d[o + 7]! + b11 * x1 * x1;
+    const dxdy = ((6 * s2 - 6 * s) * (x0 - x1)) / hy + (3 * s2 - 4 * s + 1) * m0 + (3 * s2 - 2 * s) * m1;
+    // x and h are odd in y, g and dx/dy even.
+    this.sampleCurrent = (negative ? -x : x) * this.ik;
+    this.sampleIntegral = g * this.gScale;
+    this.sampleSquare = (negative ? -h : h) * this.hScale;
+    this.sampleSlope = dxdy * this.ik * this.inverseLambdaScale;
+  }
 
   current(lambda: number): number {
     const y = lambda * this.inverseLambdaScale;
@@ -377,21 +435,28 @@ export class RollOffCurve implements FluxCurve {
   }
 
   flux(current: number): number {
+    if (current === this.lastFluxCurrent) return this.lastFlux;
     const x = Math.abs(current) / this.ik;
     const t = this.table;
-    if (x >= t.xMax) return Math.sign(current) * this.lambdaLimit;
-    const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
-    const s = (x - k * t.step) / t.step;
-    const d = t.packedInX;
-    // Hermite in x with dy/dx = 1/slope.
-    const s2 = s * s;
-    const s3 = s2 * s;
-    const y =
-      (2 * s3 - 3 * s2 + 1) * d[2 * k]! +
-      ((s3 - 2 * s2 + s) * t.step) / d[2 * k + 1]! +
-      (-2 * s3 + 3 * s2) * d[2 * k + 2]! +
-      ((s3 - s2) * t.step) / d[2 * k + 3]!;
-    return Math.sign(current) * y * this.lambdaScale;
+    let lambda: number;
+    if (x >= t.xMax) lambda = Math.sign(current) * this.lambdaLimit;
+    else {
+      const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
+      const s = (x - k * t.step) / t.step;
+      const d = t.packedInX;
+      // Hermite in x with dy/dx = 1/slope.
+      const s2 = s * s;
+      const s3 = s2 * s;
+      const y =
+        (2 * s3 - 3 * s2 + 1) * d[2 * k]! +
+        ((s3 - 2 * s2 + s) * t.step) / d[2 * k + 1]! +
+        (-2 * s3 + 3 * s2) * d[2 * k + 2]! +
+        ((s3 - s2) * t.step) / d[2 * k + 3]!;
+      lambda = Math.sign(current) * y * this.lambdaScale;
+    }
+    this.lastFluxCurrent = current;
+    this.lastFlux = lambda;
+    return lambda;
   }
 
   inductanceAt(current: number): number {

@@ -65,6 +65,21 @@ export interface PartVerdict {
   lightLoadMode: Mode | null;
 }
 
+let lastGridSpec: Spec | null = null;
+let lastGrid = { vins: [] as number[], loads: [] as number[] };
+
+/** Input voltages and loads of a spec in the order of cornerPoints (kept for the spec last asked about). */
+function cornerGrid(spec: Spec): { vins: number[]; loads: number[] } {
+  if (spec !== lastGridSpec) {
+    lastGrid = {
+      vins: inputVoltagePoints(spec).map((p) => p.vin),
+      loads: spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max],
+    };
+    lastGridSpec = spec;
+  }
+  return lastGrid;
+}
+
 /**
  * One part at every corner (the order of cornerPoints), judged without reasons. The single loop
  * behind screenFigures and the browser's ranking worker, so both give evaluatePart's numbers.
@@ -73,11 +88,11 @@ export function screenPart(solver: CornerSolver, spec: Spec, part: Part): PartVe
   const prepared = preparePart(part);
   const tolerance = effectiveTolerance(spec, part);
   const acc = new CornerAccumulator(spec, part.isat);
-  const loads = spec.iout.min === spec.iout.max ? [spec.iout.max] : [spec.iout.min, spec.iout.max];
+  const { vins, loads } = cornerGrid(spec);
   solver.startPart();
   let index = 0;
   let lightReachable = false;
-  for (const { vin } of inputVoltagePoints(spec)) {
+  for (const vin of vins) {
     for (const iout of loads) {
       for (let k = tolerance > 0 ? -1 : 0; k <= (tolerance > 0 ? 1 : 0); k++) {
         solver.solve(prepared, vin, iout, part.inductance * (1 + k * tolerance));

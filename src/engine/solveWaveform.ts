@@ -99,8 +99,27 @@ interface Scratch {
   i1: number;
   h0: number;
   h1: number;
+  /** The discontinuous ramp found by peakFluxForIntegral: its peak flux, G, i and H there. */
+  peak: number;
+  gPeak: number;
+  iPeak: number;
+  hPeak: number;
 }
-const scratch: Scratch = { v: { on: 0, off: 0 }, duty: 0, il: 0, beyond: false, lambda0: 0, i0: 0, i1: 0, h0: 0, h1: 0 };
+const scratch: Scratch = {
+  v: { on: 0, off: 0 },
+  duty: 0,
+  il: 0,
+  beyond: false,
+  lambda0: 0,
+  i0: 0,
+  i1: 0,
+  h0: 0,
+  h1: 0,
+  peak: 0,
+  gPeak: 0,
+  iPeak: 0,
+  hPeak: 0,
+};
 
 /**
  * Duty and average inductor current in continuous conduction: volt-second balance
@@ -152,15 +171,16 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): vo
     if (atBottom) lambda0 = -limit;
     s.beyond = atTop || atBottom;
     const lambda1 = lambda0 + swing;
-    // Evaluations at the same λ in a row share one table lookup.
-    const g1 = curve.currentIntegral(lambda1);
-    const i1 = curve.current(lambda1);
-    const h1 = curve.squareIntegral(lambda1);
-    const d1 = curve.currentSlope(lambda1);
-    const g0 = curve.currentIntegral(lambda0);
-    const i0 = curve.current(lambda0);
-    const h0 = curve.squareIntegral(lambda0);
-    const d0 = curve.currentSlope(lambda0);
+    curve.sample(lambda1);
+    const g1 = curve.sampleIntegral;
+    const i1 = curve.sampleCurrent;
+    const h1 = curve.sampleSquare;
+    const d1 = curve.sampleSlope;
+    curve.sample(lambda0);
+    const g0 = curve.sampleIntegral;
+    const i0 = curve.sampleCurrent;
+    const h0 = curve.sampleSquare;
+    const d0 = curve.sampleSlope;
     s.lambda0 = lambda0;
     s.i0 = i0;
     s.i1 = i1;
@@ -191,38 +211,58 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): vo
 
 /** The end values of the ramp from λ0 over Δλ, evaluated on the curve. */
 function rampEnds(curve: FluxCurve, lambda0: number, swing: number, s: Scratch): void {
-  const lambda1 = lambda0 + swing;
   s.lambda0 = lambda0;
-  s.i1 = curve.current(lambda1);
-  s.h1 = curve.squareIntegral(lambda1);
-  s.i0 = curve.current(lambda0);
-  s.h0 = curve.squareIntegral(lambda0);
+  curve.sample(lambda0 + swing);
+  s.i1 = curve.sampleCurrent;
+  s.h1 = curve.sampleSquare;
+  curve.sample(lambda0);
+  s.i0 = curve.sampleCurrent;
+  s.h0 = curve.sampleSquare;
 }
 
-/** Peak flux p with G(p) = target (G is convex and increasing for p > 0; Newton with G' = i). */
-function peakFluxForIntegral(curve: FluxCurve, target: number, s: Scratch): number {
+/**
+ * Peak flux p with G(p) = target (G is convex and increasing for p > 0; Newton with G' = i).
+ * Leaves p and G, i and H at p in the scratch.
+ */
+function peakFluxForIntegral(curve: FluxCurve, target: number, s: Scratch): void {
   s.beyond = false;
   // G(p) = p²/(2·L) for constant L; for roll-off G(p) ≥ p²/(2·L0) because L never exceeds L0,
   // so this start is at or beyond the root and Newton descends monotonically.
   let peak = Math.sqrt(2 * curve.inductance * target);
-  if (curve.constant) return peak;
-  const limit = curve.lambdaLimit;
-  if (peak > limit) peak = limit;
-  for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
-    const g = curve.currentIntegral(peak);
-    const i = curve.current(peak);
-    const error = g - target;
-    if (Math.abs(error) <= RELATIVE_TOLERANCE * target || !(i > 0)) break;
-    const step = error / i;
-    peak -= step;
-    if (peak >= limit) {
-      s.beyond = true;
-      return limit;
+  if (!curve.constant) {
+    const limit = curve.lambdaLimit;
+    if (peak > limit) peak = limit;
+    for (let iteration = 0; iteration < NEWTON_ITERATIONS; iteration++) {
+      curve.sample(peak);
+      const g = curve.sampleIntegral;
+      const i = curve.sampleCurrent;
+      const error = g - target;
+      if (Math.abs(error) <= RELATIVE_TOLERANCE * target || !(i > 0)) break;
+      const step = error / i;
+      const next = peak - step;
+      if (next >= limit) {
+        s.beyond = true;
+        peak = limit;
+        break;
+      }
+      // As in valleyFlux: with a step this small, the values at the new peak follow along their
+      // tangents (G' = i, H' = i²) to within the square of the step.
+      if (Math.abs(step) <= STEP_TOLERANCE * next) {
+        s.peak = next;
+        s.gPeak = g - step * i;
+        s.iPeak = i - step * curve.sampleSlope;
+        s.hPeak = curve.sampleSquare - step * i * i;
+        return;
+      }
+      peak = next;
     }
-    if (Math.abs(step) <= STEP_TOLERANCE * peak) break;
+    if (!s.beyond) s.beyond = peak >= limit && curve.currentIntegral(limit) < target;
   }
-  s.beyond = peak >= limit && curve.currentIntegral(limit) < target;
-  return peak;
+  curve.sample(peak);
+  s.peak = peak;
+  s.gPeak = curve.sampleIntegral;
+  s.iPeak = curve.sampleCurrent;
+  s.hPeak = curve.sampleSquare;
 }
 
 function continuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
@@ -263,11 +303,12 @@ function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: Wav
     const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops, s.v);
     if (!(v.on > 0) || !(v.off < 0)) return markUnreachable(out, 0);
     const target = p.topology === "buck" ? (p.iout * ts) / (1 / v.on - 1 / v.off) : p.iout * -v.off * ts;
-    const peak = peakFluxForIntegral(curve, target, s);
+    peakFluxForIntegral(curve, target, s);
+    const peak = s.peak;
     const duty = peak / (v.on * ts);
     const d2 = peak / (-v.off * ts);
     const conducting = duty + d2;
-    const nextIl = (conducting * curve.currentIntegral(peak)) / peak;
+    const nextIl = (conducting * s.gPeak) / peak;
     out.mode = 1 - conducting <= BCM_TOLERANCE ? "bcm" : "dcm";
     out.duty = duty;
     out.d2 = d2;
@@ -276,10 +317,10 @@ function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: Wav
     out.fluxSwing = peak;
     out.vOn = v.on;
     out.vOff = v.off;
-    out.ipk = curve.current(peak);
+    out.ipk = s.iPeak;
     out.ivalley = 0;
     out.iavg = nextIl;
-    out.meanSquare = (conducting * curve.squareIntegral(peak)) / peak;
+    out.meanSquare = (conducting * s.hPeak) / peak;
     out.negativeFraction = 0;
     out.beyondCurve = s.beyond;
     out.unreachable = false;
@@ -303,8 +344,11 @@ export function solveWaveform(p: OperatingPoint, curve: FluxCurve, out: Waveform
     // The mean over a ramp rises with its starting flux, so the continuous valley would be
     // negative exactly when a ramp from λ = 0 already averages more than IL: then the diode
     // blocks and the current rests at zero.
+    // Two bounds decide most points without the integral: L never exceeds L0, so that mean is at
+    // least Δλ/(2·L0); and i rises with λ, so it stays below IL while Δλ ≤ λ(IL).
     const swing = (s.v.on * s.duty) / p.fsw;
-    if (curve.currentIntegral(swing) / swing > s.il) return discontinuous(p, curve, s, out);
+    if (swing > 2 * curve.inductance * s.il) return discontinuous(p, curve, s, out);
+    if (swing > curve.flux(s.il) && curve.currentIntegral(swing) / swing > s.il) return discontinuous(p, curve, s, out);
   }
   return continuous(p, curve, s, out);
 }

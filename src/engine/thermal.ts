@@ -45,9 +45,8 @@ export const RUNAWAY_TEMPERATURE = 1000;
 
 export interface ThermalBalance {
   ambient: number;
-  /** Winding loss of the present waveform at the DCR's reference temperature, W. */
-  copperLossAtReference: number;
-  referenceTemperature: number;
+  /** Winding loss of the present waveform with the winding resistance taken at 20 °C, W. */
+  copperLossAt20: number;
   /** Loss that does not scale with copper resistance (core), W. */
   otherLoss: number;
   ratedPower: number;
@@ -59,22 +58,30 @@ export interface ThermalBalance {
 
 /**
  * Temperature T with T = Ta + ΔTrated·(P(T)/Prated)^k, where the copper part of P grows as
- * R(T) = R_ref·(1 + α20(T − 20))/(1 + α20(T_ref − 20)) (IEC 60028). Newton on
- * h(T) = T − Ta − rise(P(T)); for k = 1 this is the self-consistent form
- * ΔT = Rth·P20·(…)/(1 − Rth·P20·α20), which runs away when Rth·P20·α20 ≥ 1.
+ * R(T) = R20·(1 + α20(T − 20)) (IEC 60028). Newton on h(T) = T − Ta − rise(P(T)); for k = 1
+ * this is the self-consistent form ΔT = Rth·P20·(…)/(1 − Rth·P20·α20), which runs away when
+ * Rth·P20·α20 ≥ 1.
  */
 export function settleTemperature(b: ThermalBalance): number {
-  const slope = (b.copperLossAtReference * COPPER_ALPHA20) / (1 + COPPER_ALPHA20 * (b.referenceTemperature - 20));
-  const base = b.copperLossAtReference - slope * b.referenceTemperature + b.otherLoss;
+  // P(T) = base + slope·T.
+  const slope = b.copperLossAt20 * COPPER_ALPHA20;
+  const base = b.copperLossAt20 - slope * 20 + b.otherLoss;
   const power = powerTable(b.exponent);
   const inverseRated = 1 / b.ratedPower;
+  const k = b.exponent;
   let t = b.start;
   for (let iteration = 0; iteration < 50; iteration++) {
     const p = base + slope * t;
-    const rise = p > 0 ? b.ratedRise * power.pow(p * inverseRated) : 0;
-    const dh = 1 - (p > 0 ? (b.exponent * rise * slope) / p : 0);
-    if (!(dh > 0)) return RUNAWAY_TEMPERATURE;
-    const step = (t - b.ambient - rise) / dh;
+    let step: number;
+    if (p > 0) {
+      const rise = b.ratedRise * power.pow(p * inverseRated);
+      // h'(T) = 1 − k·rise·slope/P; multiplied through by P so that the step takes one division.
+      const dhTimesP = p - k * rise * slope;
+      if (!(dhTimesP > 0)) return RUNAWAY_TEMPERATURE;
+      step = ((t - b.ambient - rise) * p) / dhTimesP;
+    } else {
+      step = t - b.ambient;
+    }
     const next = Math.max(t - step, b.ambient);
     if (!(next < RUNAWAY_TEMPERATURE)) return RUNAWAY_TEMPERATURE;
     t = next;
