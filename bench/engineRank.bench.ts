@@ -1,7 +1,9 @@
 import type { Part } from "../src/engine/types.ts";
 import { completePart } from "../src/engine/partDefaults.ts";
 import { makeSpec } from "../src/engine/specDefaults.ts";
-import { joinFigures, rankFigures, screenParts, type PartFigures } from "../src/engine/screenParts.ts";
+import { screenParts } from "../src/engine/screenParts.ts";
+import { finishRanking } from "../src/worker/finishRanking.ts";
+import type { SliceFigures } from "../src/worker/screenSlice.ts";
 import { Worker } from "node:worker_threads";
 import { cornerPoints } from "../src/engine/cornerPoints.ts";
 import { medianMs } from "./measure.ts";
@@ -102,8 +104,9 @@ export async function benchEngineRank(count = 100_000): Promise<string[]> {
 }
 
 /**
- * Wall time of the ranking on both cores: each worker holds the list (as the browser's workers
- * do after an import) and screens half of it; the main thread joins, scores and sorts.
+ * Wall time of the ranking on both cores, by the workbench's own path: each worker holds the list
+ * (as the browser's ranking workers do after an import) and screens half of it with screenSlice;
+ * finishRanking joins, scores and sorts.
  */
 async function twoWorkers(count: number, parts: Part[]): Promise<number> {
   const entry = new URL("./screenSliceWorker.ts", import.meta.url).href;
@@ -120,13 +123,13 @@ async function twoWorkers(count: number, parts: Part[]): Promise<number> {
     const slices = await Promise.all(
       workers.map(
         (w, k) =>
-          new Promise<PartFigures>((resolve) => {
-            w.once("message", (figures: PartFigures) => resolve(figures));
+          new Promise<SliceFigures>((resolve) => {
+            w.once("message", (slice: SliceFigures) => resolve(slice));
             w.postMessage({ from: ranges[k]![0], to: ranges[k]![1] });
           }),
       ),
     );
-    rankFigures(benchSpec, parts, joinFigures(slices));
+    finishRanking(benchSpec, parts, slices);
     return performance.now() - start;
   };
   await once();

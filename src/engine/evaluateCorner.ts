@@ -23,8 +23,12 @@ export interface PreparedPart {
   /** The same winding at 20 °C, where IEC 60028 states α20: R(T) = dcr20·(1 + α20·(T − 20)). */
   dcr20: number | null;
   ratedPower: number | null;
+  /** 1/ratedPower (1 when unrated), formed once per part. */
+  inverseRatedPower: number;
   /** Knee current of the roll-off law at 25 °C, null for constant L. */
   knee25: number | null;
+  /** knee25/Isat: Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C. */
+  kneePerIsat: number;
 }
 
 /** DCR used for losses: the maximum where given (worst case), else the typical. */
@@ -34,12 +38,15 @@ export function lossDcr(part: Part): number | null {
 
 export function preparePart(part: Part): PreparedPart {
   const dcrRef = lossDcr(part);
+  const ratedPower = ratedHeatingPower(part);
   return {
     part,
     dcrRef,
     dcr20: dcrRef === null ? null : copperResistance(dcrRef, part.dcrTemp, 20),
-    ratedPower: ratedHeatingPower(part),
+    ratedPower,
+    inverseRatedPower: ratedPower === null ? 1 : 1 / ratedPower,
     knee25: part.isat === null ? null : knee(part.isat, part.isatDrop, part.rollOffExponent),
+    kneePerIsat: part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent),
   };
 }
 
@@ -96,7 +103,10 @@ export class CornerSolver {
   isatAtTemp: number | null = null;
   irms = 0;
   ripple = 0;
-  rippleRatio = 0;
+  /** Ripple over |average inductor current| (Infinity at zero average), worked out when read. */
+  get rippleRatio(): number {
+    return this.solution.iavg !== 0 ? this.ripple / Math.abs(this.solution.iavg) : Infinity;
+  }
   private curve: FluxCurve;
   private readonly constantCurve = new ConstantInductance(1);
   private readonly rollOffCurve = new RollOffCurve(1, 1, 2);
@@ -129,7 +139,7 @@ export class CornerSolver {
       ambient: spec.ambient,
       copperLossAt20: 0,
       otherLoss: 0,
-      ratedPower: 1,
+      inverseRatedPower: 1,
       ratedRise: 40,
       exponent: spec.thermalExponent,
       start: spec.ambient,
@@ -141,8 +151,7 @@ export class CornerSolver {
     if (isat === null || prepared.knee25 === null) {
       this.curve = this.constantCurve.set(inductance);
     } else {
-      // Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C.
-      this.curve = this.rollOffCurve.set(inductance, (prepared.knee25 * isat) / (part.isat as number), part.rollOffExponent);
+      this.curve = this.rollOffCurve.set(inductance, prepared.kneePerIsat * isat, part.rollOffExponent);
     }
   }
 
@@ -154,7 +163,7 @@ export class CornerSolver {
     const { spec, op, balance } = this;
     const { part, dcr20, ratedPower } = prepared;
     const thermal = ratedPower !== null && dcr20 !== null;
-    balance.ratedPower = ratedPower ?? 1;
+    balance.inverseRatedPower = prepared.inverseRatedPower;
     balance.ratedRise = part.irmsRise;
     balance.otherLoss = 0;
     balance.start = spec.ambient;
@@ -213,7 +222,6 @@ export class CornerSolver {
     this.isatAtTemp = isatAtTemperature(part, temperature);
     this.irms = Math.sqrt(solution.meanSquare);
     this.ripple = ripple;
-    this.rippleRatio = solution.iavg !== 0 ? ripple / Math.abs(solution.iavg) : Infinity;
   }
 
   /** Forgets the warm start, so that a part's corners come out the same whichever part came before. */

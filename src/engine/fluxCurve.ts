@@ -108,8 +108,9 @@ interface RollOffTable {
   h: Float64Array;
   /** [x, slope, g, h] of node k at 4k. */
   packed: Float64Array;
-  /** [y, slope] of node k at 2k. */
+  /** [y, step/slope = step·dy/dx, slope] of node k at 3k, for lookups by current. */
   packedInX: Float64Array;
+  inverseStep: number;
   yMax: number;
   xMax: number;
   /** bucket[b] = last node with y ≤ b·yMax/buckets, to start the interval search. */
@@ -182,7 +183,7 @@ function buildTable(n: number): RollOffTable {
     bucket[b] = k;
   }
   const base = { n, step, nodes, x, y, slope, g, h, yMax, xMax, bucket, bucketScale: BUCKETS / yMax };
-  return { ...base, packed: pack([x, slope, g, h]), packedInX: pack([y, slope]), uniform: buildUniformGrid(base) };
+  return { ...base, packed: pack([x, slope, g, h]), packedInX: pack([y, slope.map((m) => step / m), slope]), inverseStep: 1 / step, uniform: buildUniformGrid(base) };
 }
 
 /** ∫ from a to b of s^p/(1 + s^n) ds by 5-point Gauss–Legendre (b − a at most one table step). */
@@ -197,7 +198,7 @@ function segmentIntegral(a: number, b: number, n: number, p: number): number {
   return sum * half;
 }
 
-function buildUniformGrid(t: Omit<RollOffTable, "uniform" | "packed" | "packedInX">): RollOffTable["uniform"] {
+function buildUniformGrid(t: Omit<RollOffTable, "uniform" | "packed" | "packedInX" | "inverseStep">): RollOffTable["uniform"] {
   const xLimit = Math.min(t.xMax, Math.pow(UNIFORM_SLOPE_LIMIT - 1, 1 / t.n));
   // y at xLimit, from the node below it.
   const kLimit = Math.min(t.nodes - 2, Math.floor(xLimit / t.step));
@@ -275,6 +276,8 @@ export class RollOffCurve implements FluxCurve {
   private lastOffset = 0;
   private lastT = 0;
   private lastHy = 0;
+  private lastInverseHy = 0;
+  private inverseIk = 0;
   private grid: Float64Array;
   // The last flux() answer: the mode test and the valley's first guess both ask for λ(IL).
   private lastFluxCurrent = NaN;
@@ -293,6 +296,8 @@ export class RollOffCurve implements FluxCurve {
     this.n = n;
     this.lambdaScale = inductance * ik;
     this.inverseLambdaScale = 1 / this.lambdaScale;
+    // 1/Ik = L0/(L0·Ik), without a second division.
+    this.inverseIk = inductance * this.inverseLambdaScale;
     this.gScale = inductance * ik * ik;
     this.hScale = inductance * ik * ik * ik;
     this.lambdaLimit = this.table.yMax * this.lambdaScale;
@@ -312,6 +317,7 @@ export class RollOffCurve implements FluxCurve {
       this.lastY = yAbs;
       this.lastOffset = 4 * k;
       this.lastHy = u.step;
+      this.lastInverseHy = u.inverseStep;
       this.lastT = position - k;
       this.grid = u.packed;
       return;
@@ -331,7 +337,8 @@ export class RollOffCurve implements FluxCurve {
     this.lastY = yAbs;
     this.lastOffset = 4 * lo;
     this.lastHy = hy;
-    this.lastT = hy > 0 ? (yc - t.y[lo]!) / hy : 0;
+    this.lastInverseHy = hy > 0 ? 1 / hy : 0;
+    this.lastT = (yc - t.y[lo]!) * this.lastInverseHy;
   }
 
   /** Cubic Hermite on the interval found by locate(), values f and derivatives d per unit y. */
@@ -369,7 +376,7 @@ export class RollOffCurve implements FluxCurve {
     const x = b00 * x0 + b10 * m0 + b01 * x1 + b11 * m1;
     const g = b00 * d[o + 2]! + b10 * x0 + b01 * d[o + 6]! + b11 * x1;
     const h = b00 * d[o + 3]! + b10 * x0 * x0 + b01 * d[o + 7]! + b11 * x1 * x1;
-    const dxdy = ((6 * s2 - 6 * s) * (x0 - x1)) / hy + (3 * s2 - 4 * s + 1) * m0 + (3 * s2 - 2 * s) * m1;
+    const dxdy = (6 * s2 - 6 * s) * (x0 - x1) * this.lastInverseHy + (3 * s2 - 4 * s + 1) * m0 + (3 * s2 - 2 * s) * m1;
     // x and h are odd in y, g and dx/dy even.
     this.sampleCurrent = (negative ? -x : x) * this.ik;
     this.sampleIntegral = g * this.gScale;
@@ -393,21 +400,22 @@ export class RollOffCurve implements FluxCurve {
     const d = this.grid;
     const s = this.lastT;
     // Derivative of the cubic Hermite that current() evaluates; dx/dy is even in y.
-    const dxdy = ((6 * s * s - 6 * s) * (d[o]! - d[o + 4]!)) / this.lastHy + (3 * s * s - 4 * s + 1) * d[o + 1]! + (3 * s * s - 2 * s) * d[o + 5]!;
+    const dxdy = (6 * s * s - 6 * s) * (d[o]! - d[o + 4]!) * this.lastInverseHy + (3 * s * s - 4 * s + 1) * d[o + 1]! + (3 * s * s - 2 * s) * d[o + 5]!;
     return dxdy * this.ik * this.inverseLambdaScale;
   }
 
   rampCentre(current: number, swing: number): number {
     const centre = this.flux(current);
-    const x = Math.abs(current) / this.ik;
+    const x = Math.abs(current) * this.inverseIk;
     if (x === 0 || x >= this.table.xMax) return centre;
     // i' = (1 + x^n)/L0 and i'' = n·x^(n−1)·(1 + x^n)/(L0²·Ik), so the centre moves by
     // −(i''/i')·Δλ²/24 = −n·x^(n−1)·Δλ²/(24·L0·Ik). x^n comes from the tabulated slope 1 + x^n.
     const t = this.table;
-    const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
-    const f = (x - k * t.step) / t.step;
-    const xn = (1 - f) * t.packedInX[2 * k + 1]! + f * t.packedInX[2 * k + 3]! - 1;
-    let shift = (((this.n * xn) / x) * swing * swing * this.inverseLambdaScale) / 24;
+    const position = x * t.inverseStep;
+    const k = Math.min(t.nodes - 2, Math.floor(position));
+    const f = position - k;
+    const xn = (1 - f) * t.packedInX[3 * k + 2]! + f * t.packedInX[3 * k + 5]! - 1;
+    let shift = ((this.n * xn) / x) * swing * swing * this.inverseLambdaScale * (1 / 24);
     // Far past the knee the expansion overshoots; Newton finishes from within half a swing.
     if (shift > swing / 2) shift = swing / 2;
     return current < 0 ? centre + shift : centre - shift;
@@ -436,22 +444,20 @@ export class RollOffCurve implements FluxCurve {
 
   flux(current: number): number {
     if (current === this.lastFluxCurrent) return this.lastFlux;
-    const x = Math.abs(current) / this.ik;
+    const x = Math.abs(current) * this.inverseIk;
     const t = this.table;
     let lambda: number;
     if (x >= t.xMax) lambda = Math.sign(current) * this.lambdaLimit;
     else {
-      const k = Math.min(t.nodes - 2, Math.floor(x / t.step));
-      const s = (x - k * t.step) / t.step;
+      const position = x * t.inverseStep;
+      const k = Math.min(t.nodes - 2, Math.floor(position));
+      const s = position - k;
       const d = t.packedInX;
-      // Hermite in x with dy/dx = 1/slope.
+      // Hermite in x with dy/dx = 1/slope (stored times the step).
       const s2 = s * s;
       const s3 = s2 * s;
-      const y =
-        (2 * s3 - 3 * s2 + 1) * d[2 * k]! +
-        ((s3 - 2 * s2 + s) * t.step) / d[2 * k + 1]! +
-        (-2 * s3 + 3 * s2) * d[2 * k + 2]! +
-        ((s3 - s2) * t.step) / d[2 * k + 3]!;
+      const o = 3 * k;
+      const y = (2 * s3 - 3 * s2 + 1) * d[o]! + (s3 - 2 * s2 + s) * d[o + 1]! + (-2 * s3 + 3 * s2) * d[o + 3]! + (s3 - s2) * d[o + 4]!;
       lambda = Math.sign(current) * y * this.lambdaScale;
     }
     this.lastFluxCurrent = current;

@@ -181,30 +181,56 @@ export function joinFigures(slices: readonly PartFigures[]): PartFigures {
   };
 }
 
+/** The figures of a list that do not depend on the spec (NaN where unknown). */
+interface PartColumns {
+  footprint: Float64Array;
+  height: Float64Array;
+  price: Float64Array;
+  volume: Float64Array;
+}
+
+/**
+ * Kept per list: a list is re-ranked at every spec change, and reading 100 000 parts again costs
+ * more than scoring them. Lists are not edited in place once ranked (the app builds a new array
+ * for every change of its catalog); a list that grew is read again.
+ */
+const columnsOfList = new WeakMap<readonly Part[], PartColumns>();
+
+function partColumns(parts: readonly Part[]): PartColumns {
+  const known = columnsOfList.get(parts);
+  if (known !== undefined && known.volume.length === parts.length) return known;
+  const n = parts.length;
+  const columns = { footprint: new Float64Array(n), height: new Float64Array(n), price: new Float64Array(n), volume: new Float64Array(n) };
+  for (let i = 0; i < n; i++) {
+    const part = parts[i]!;
+    columns.footprint[i] = part.length !== null && part.width !== null ? part.length * part.width : NaN;
+    columns.height[i] = part.height ?? NaN;
+    columns.price[i] = part.price ?? NaN;
+    columns.volume[i] = volume(part) ?? NaN;
+  }
+  columnsOfList.set(parts, columns);
+  return columns;
+}
+
 /** Scores, Pareto flags and rank order of a whole list from its figures. */
 export function rankFigures(spec: Spec, parts: readonly Part[], figures: PartFigures): Screening {
   const { status, totalLoss, minMargin, unreachable, failures } = figures;
   const n = parts.length;
+  const { footprint, height, price, volume: partVolume } = partColumns(parts);
   const anyPass = status.includes("pass");
   const reference = new Uint8Array(n);
   const loss = new Float64Array(n);
-  const footprint = new Float64Array(n);
-  const height = new Float64Array(n);
-  const price = new Float64Array(n);
   // The trade-off front is drawn among the parts that did not fail.
   const frontLoss = new Float64Array(n);
   const frontVolume = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const part = parts[i]!;
-    reference[i] = !anyPass || status[i] === "pass" ? 1 : 0;
+    const pass = status[i] === "pass";
+    reference[i] = !anyPass || pass ? 1 : 0;
     // A part that cannot reach the output at some corner has no meaningful loss figure.
     loss[i] = unreachable[i] ? NaN : totalLoss[i]!;
-    footprint[i] = part.length !== null && part.width !== null ? part.length * part.width : NaN;
-    height[i] = part.height ?? NaN;
-    price[i] = part.price ?? NaN;
-    const counted = status[i] !== "fail";
+    const counted = pass || status[i] === "incomplete";
     frontLoss[i] = counted ? totalLoss[i]! : NaN;
-    frontVolume[i] = counted ? (volume(part) ?? NaN) : NaN;
+    frontVolume[i] = counted ? partVolume[i]! : NaN;
   }
   const score = scoreParts({ loss, footprint, height, price, margin: minMargin }, reference, spec.weights);
   const front = paretoFront(frontLoss, frontVolume);

@@ -135,6 +135,12 @@ function continuousDuty(p: OperatingPoint, s: Scratch): boolean {
     const duty = -v.off / (v.on - v.off);
     const next = inductorCurrentCcm(p.topology, p.iout, duty);
     if (!(duty < 1) || !Number.isFinite(next)) return false;
+    if (next === il) {
+      // The drops were taken at this very current (always so for a buck): v and duty are final.
+      s.duty = duty;
+      s.il = il;
+      return true;
+    }
     const settled = Math.abs(next - il) <= RELATIVE_TOLERANCE * Math.max(1, Math.abs(next));
     il = next;
     if (settled || p.topology === "buck") {
@@ -156,7 +162,7 @@ function continuousDuty(p: OperatingPoint, s: Scratch): boolean {
 function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): void {
   s.beyond = false;
   // Constant L: mean = (λ0 + λ0 + Δλ)/(2L), so λ0 = L·IL − Δλ/2 exactly (the textbook valley).
-  let lambda0 = curve.rampCentre(il, swing) - swing / 2;
+  let lambda0 = curve.rampCentre(il, swing) - 0.5 * swing;
   if (curve.constant) {
     rampEnds(curve, lambda0, swing, s);
     return;
@@ -186,13 +192,14 @@ function valleyFlux(curve: FluxCurve, il: number, swing: number, s: Scratch): vo
     s.i1 = i1;
     s.h0 = h0;
     s.h1 = h1;
-    const error = (g1 - g0) / swing - il;
-    if (Math.abs(error) <= RELATIVE_TOLERANCE * scale) return;
+    // The mean's error times Δλ: (G1 − G0) − IL·Δλ; Newton's step is that over (i1 − i0).
+    const error = g1 - g0 - il * swing;
+    if (Math.abs(error) <= RELATIVE_TOLERANCE * scale * swing) return;
     // Clamped at the end of the curve and the root lies further out: the core is past saturation.
     if ((atTop && error < 0) || (atBottom && error > 0)) return;
-    const slope = (i1 - i0) / swing;
-    if (!(slope > 0)) return;
-    const step = error / slope;
+    const rise = i1 - i0;
+    if (!(rise > 0)) return;
+    const step = error / rise;
     const next = lambda0 - step;
     // Newton converges quadratically: once the step is this small the error left is of the
     // order of its square, and so is that of carrying the end values to the new λ0 along their
@@ -265,8 +272,7 @@ function peakFluxForIntegral(curve: FluxCurve, target: number, s: Scratch): void
   s.hPeak = curve.sampleSquare;
 }
 
-function continuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
-  const swing = (s.v.on * s.duty) / p.fsw;
+function continuous(curve: FluxCurve, swing: number, s: Scratch, out: WaveformSolution): WaveformSolution {
   valleyFlux(curve, s.il, swing, s);
   const lambda0 = s.lambda0;
   const ipk = s.i1;
@@ -299,16 +305,23 @@ function continuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: Wavefo
 function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: WaveformSolution): WaveformSolution {
   const ts = 1 / p.fsw;
   let il = s.il;
+  // Divisions are the slow step here; each quotient below is formed once.
   for (let iteration = 0; iteration < DUTY_ITERATIONS; iteration++) {
     const v = segmentVoltages(p.topology, p.vin, p.vout, il, p.drops, s.v);
     if (!(v.on > 0) || !(v.off < 0)) return markUnreachable(out, 0);
-    const target = p.topology === "buck" ? (p.iout * ts) / (1 / v.on - 1 / v.off) : p.iout * -v.off * ts;
+    const on = v.on;
+    const off = -v.off;
+    // Buck: Iout·Ts/(1/von + 1/|voff|) = Iout·Ts·von·|voff|/(von + |voff|).
+    const target = p.topology === "buck" ? (p.iout * ts * on * off) / (on + off) : p.iout * off * ts;
     peakFluxForIntegral(curve, target, s);
     const peak = s.peak;
-    const duty = peak / (v.on * ts);
-    const d2 = peak / (-v.off * ts);
+    // D = p/(von·Ts) and D2 = p/(|voff|·Ts) from one quotient q = p/(von·|voff|·Ts).
+    const q = peak / (on * off * ts);
+    const duty = q * off;
+    const d2 = q * on;
     const conducting = duty + d2;
-    const nextIl = (conducting * s.gPeak) / peak;
+    const perPeak = conducting / peak;
+    const nextIl = perPeak * s.gPeak;
     out.mode = 1 - conducting <= BCM_TOLERANCE ? "bcm" : "dcm";
     out.duty = duty;
     out.d2 = d2;
@@ -320,7 +333,7 @@ function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: Wav
     out.ipk = s.iPeak;
     out.ivalley = 0;
     out.iavg = nextIl;
-    out.meanSquare = (conducting * s.hPeak) / peak;
+    out.meanSquare = perPeak * s.hPeak;
     out.negativeFraction = 0;
     out.beyondCurve = s.beyond;
     out.unreachable = false;
@@ -340,15 +353,15 @@ function discontinuous(p: OperatingPoint, curve: FluxCurve, s: Scratch, out: Wav
 export function solveWaveform(p: OperatingPoint, curve: FluxCurve, out: WaveformSolution = emptySolution()): WaveformSolution {
   const s = scratch;
   if (!continuousDuty(p, s)) return markUnreachable(out, 1);
+  const swing = (s.v.on * s.duty) / p.fsw;
   if (p.rectifier === "diode") {
     // The mean over a ramp rises with its starting flux, so the continuous valley would be
     // negative exactly when a ramp from λ = 0 already averages more than IL: then the diode
-    // blocks and the current rests at zero.
-    // Two bounds decide most points without the integral: L never exceeds L0, so that mean is at
-    // least Δλ/(2·L0); and i rises with λ, so it stays below IL while Δλ ≤ λ(IL).
-    const swing = (s.v.on * s.duty) / p.fsw;
+    // blocks and the current rests at zero. Two bounds decide most points without the integral:
+    // L never exceeds L0, so that mean is at least Δλ/(2·L0); and i rises with λ, so the mean
+    // stays below IL while Δλ ≤ λ(IL).
     if (swing > 2 * curve.inductance * s.il) return discontinuous(p, curve, s, out);
-    if (swing > curve.flux(s.il) && curve.currentIntegral(swing) / swing > s.il) return discontinuous(p, curve, s, out);
+    if (swing > curve.flux(s.il) && curve.currentIntegral(swing) > s.il * swing) return discontinuous(p, curve, s, out);
   }
-  return continuous(p, curve, s, out);
+  return continuous(curve, swing, s, out);
 }

@@ -49,7 +49,8 @@ export interface ThermalBalance {
   copperLossAt20: number;
   /** Loss that does not scale with copper resistance (core), W. */
   otherLoss: number;
-  ratedPower: number;
+  /** 1/(loss at the rated heating current), W⁻¹, formed once per part by the caller. */
+  inverseRatedPower: number;
   ratedRise: number;
   exponent: number;
   /** Where Newton starts, °C. */
@@ -67,7 +68,7 @@ export function settleTemperature(b: ThermalBalance): number {
   const slope = b.copperLossAt20 * COPPER_ALPHA20;
   const base = b.copperLossAt20 - slope * 20 + b.otherLoss;
   const power = powerTable(b.exponent);
-  const inverseRated = 1 / b.ratedPower;
+  const inverseRated = b.inverseRatedPower;
   const k = b.exponent;
   let t = b.start;
   for (let iteration = 0; iteration < 50; iteration++) {
