@@ -2,11 +2,11 @@ import type { Part } from "../src/engine/types.ts";
 import { completePart } from "../src/engine/partDefaults.ts";
 import { makeSpec } from "../src/engine/specDefaults.ts";
 import { screenParts } from "../src/engine/screenParts.ts";
-import { finishRanking } from "../src/worker/finishRanking.ts";
-import type { SliceFigures } from "../src/worker/screenSlice.ts";
+import { RankingClient, type WorkerLike } from "../src/worker/rankingClient.ts";
+import type { RankReply } from "../src/worker/protocol.ts";
 import { Worker } from "node:worker_threads";
 import { cornerPoints } from "../src/engine/cornerPoints.ts";
-import { medianMs } from "./measure.ts";
+import { medianMs, settle } from "./measure.ts";
 import { makeRandom } from "../sample-parts/generate.ts";
 
 export const benchSpec = makeSpec({
@@ -87,7 +87,7 @@ export async function benchEngineRank(count = 100_000): Promise<string[]> {
   const floor = await medianMs(() => floorLoop(inductance, dcr, out, [benchSpec.vin.min, benchSpec.vin.nom, benchSpec.vin.max], [benchSpec.iout.min, benchSpec.iout.max]));
   const constantMs = await medianMs(() => screenParts(benchSpec, constant));
   const rolledMs = await medianMs(() => screenParts(benchSpec, rolled));
-  const parallelMs = await twoWorkers(count, rolled);
+  const parallelMs = await twoWorkers(rolled);
   const ns = (ms: number) => ((ms * 1e6) / partCorners).toFixed(0);
   lines.push(`engine ranking: ${count.toLocaleString("en")} parts × ${cornersPerPart} corners = ${partCorners.toLocaleString("en")} part-corners (median of 5)`);
   lines.push(`  floor (closed-form buck, bare typed-array loop): ${floor.toFixed(1)} ms, ${ns(floor)} ns per part-corner`);
@@ -98,47 +98,49 @@ export async function benchEngineRank(count = 100_000): Promise<string[]> {
     `  roll-off:    ${rolledMs.toFixed(0)} ms, ${ns(rolledMs)} ns per part-corner, ${Math.round((count / rolledMs) * 1000).toLocaleString("en")} parts/s, ${(rolledMs / floor).toFixed(0)}× floor, ${(rolledMs / constantMs).toFixed(2)}× constant L`,
   );
   lines.push(
-    `  roll-off, 2 worker threads: ${parallelMs.toFixed(0)} ms (slices screened in parallel, then scored and ranked together), ${Math.round((count / parallelMs) * 1000).toLocaleString("en")} parts/s`,
+    `  roll-off, 2 worker threads: ${parallelMs.toFixed(0)} ms (the workbench's ranking client and workers, request to ranking received), ${Math.round((count / parallelMs) * 1000).toLocaleString("en")} parts/s`,
   );
   return lines;
 }
 
 /**
- * Wall time of the ranking on both cores, by the workbench's own path: each worker holds the list
- * (as the browser's ranking workers do after an import) and screens half of it with screenSlice;
- * finishRanking joins, scores and sorts.
+ * Wall time of the ranking on both cores, by the workbench's own path: its RankingClient hands
+ * ranges of the list to two of its ranking workers (rankWorkerCore, here on Node worker threads),
+ * which hold the list as they do after an import; the first joins, scores and sorts. Timed from
+ * rank() to the ranking received.
  */
-async function twoWorkers(count: number, parts: Part[]): Promise<number> {
-  const entry = new URL("./screenSliceWorker.ts", import.meta.url).href;
+async function twoWorkers(parts: Part[]): Promise<number> {
   const bootstrap = new URL("./tsWorker.mjs", import.meta.url);
-  const half = Math.floor(count / 2);
-  const ranges = [
-    [0, half],
-    [half, count],
-  ] as const;
-  const workers = ranges.map(() => new Worker(bootstrap, { workerData: { count, entry } }));
-  await Promise.all(workers.map((w) => new Promise((resolve) => w.once("message", resolve))));
+  const entry = new URL("./rankWorkerNode.ts", import.meta.url).href;
+  const threads = [0, 1].map(() => new Worker(bootstrap, { workerData: { entry } }));
+  await Promise.all(threads.map((w) => new Promise((resolve) => w.once("message", resolve))));
+  const workers: WorkerLike[] = threads.map((thread) => {
+    const like: WorkerLike = {
+      onmessage: null,
+      postMessage: (message, transfer) => thread.postMessage(message, (transfer ?? []) as ArrayBuffer[]),
+      terminate: () => void thread.terminate(),
+    };
+    thread.on("message", (data: RankReply) => like.onmessage?.({ data } as MessageEvent<RankReply>));
+    return like;
+  });
+  let finished: (() => void) | null = null;
+  const client = new RankingClient(workers, { onProgress: () => {}, onRanked: () => finished?.(), onFailed: (_job, message) => console.log(`ranking failed: ${message}`) });
+  await client.sendList("bench", "bench", parts);
+  await client.setCatalog(1, ["bench"]);
   const once = async () => {
+    const ranked = new Promise<void>((resolve) => (finished = resolve));
     const start = performance.now();
-    const slices = await Promise.all(
-      workers.map(
-        (w, k) =>
-          new Promise<SliceFigures>((resolve) => {
-            w.once("message", (slice: SliceFigures) => resolve(slice));
-            w.postMessage({ from: ranges[k]![0], to: ranges[k]![1] });
-          }),
-      ),
-    );
-    finishRanking(benchSpec, parts, slices);
+    client.rank(benchSpec, 1, parts.length);
+    await ranked;
     return performance.now() - start;
   };
   await once();
   const times: number[] = [];
   for (let r = 0; r < 5; r++) {
-    await new Promise((resolve) => setTimeout(resolve, 400));
+    await settle();
     times.push(await once());
   }
-  await Promise.all(workers.map((w) => w.terminate()));
+  client.terminate();
   times.sort((a, b) => a - b);
   return times[2]!;
 }

@@ -23,16 +23,38 @@ interface Job {
   version: number;
   spec: Spec;
   count: number;
+  /** Ranges of the list still to hand out, first one next. */
+  pending: { from: number; to: number }[];
+  chunks: number;
   slices: SliceFigures[];
+  /** Parts in the slices already back. */
+  doneBefore: number;
+  /** Parts done so far in the range each worker is screening. */
   progress: number[];
+}
+
+/**
+ * The list is cut into about this many ranges per worker, handed out one at a time as workers
+ * come back, so that a worker slowed by anything else on the machine takes fewer of them and
+ * both finish together; ranges below MIN_CHUNK parts are not worth a round trip.
+ */
+const CHUNKS_PER_WORKER = 6;
+const MIN_CHUNK = 2000;
+
+function chunkRanges(count: number, workers: number): { from: number; to: number }[] {
+  const size = Math.max(MIN_CHUNK, Math.ceil(count / (workers * CHUNKS_PER_WORKER)));
+  const ranges: { from: number; to: number }[] = [];
+  for (let from = 0; from === 0 || from < count; from += size) ranges.push({ from, to: Math.min(count, from + size) });
+  return ranges;
 }
 
 /** Lets the page handle input between two chunks of a long send. */
 const pause = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 
 /**
- * Runs rankings on a pool of workers: each screens one slice of the list, the first one joins the
- * slices and ranks the whole (scores are relative to the best part, so they need every slice).
+ * Runs rankings on a pool of workers: they screen ranges of the list handed out as they come back,
+ * the first one joins the slices and ranks the whole (scores are relative to the best part, so
+ * they need every slice).
  * A new request supersedes the running one; the workers drop stale work at their next step.
  * Every message goes through one queue, so lists, catalogs and jobs arrive in the order sent.
  */
@@ -95,17 +117,22 @@ export class RankingClient {
     const job = this.nextJob++;
     const previous = this.current;
     const n = this.workers.length;
-    this.current = { job, version, spec, count, slices: [], progress: new Array<number>(n).fill(0) };
+    const pending = chunkRanges(count, n);
+    const current: Job = { job, version, spec, count, pending, chunks: pending.length, slices: [], doneBefore: 0, progress: new Array<number>(n).fill(0) };
+    this.current = current;
     void this.enqueue(() => {
       if (this.current?.job !== job) return;
       if (previous !== null) for (const w of this.workers) w.postMessage({ type: "cancel", job: previous.job });
-      const size = Math.ceil(count / n);
-      this.workers.forEach((w, k) => {
-        const from = Math.min(count, k * size);
-        w.postMessage({ type: "screen", job, version, spec, from, to: Math.min(count, from + size) });
-      });
+      this.workers.forEach((_, k) => this.handOut(current, k));
     });
     return job;
+  }
+
+  /** Gives worker k the next range of the job, if one is left. */
+  private handOut(job: Job, k: number): void {
+    const range = job.pending.shift();
+    if (range === undefined) return;
+    this.workers[k]!.postMessage({ type: "screen", job: job.job, version: job.version, spec: job.spec, from: range.from, to: range.to });
   }
 
   cancel(): void {
@@ -132,11 +159,14 @@ export class RankingClient {
     switch (reply.type) {
       case "progress":
         job.progress[worker] = reply.done;
-        this.listener.onProgress(job.job, job.progress.reduce((a, b) => a + b, 0), job.count);
+        this.listener.onProgress(job.job, job.doneBefore + job.progress.reduce((a, b) => a + b, 0), job.count);
         return;
       case "slice": {
         job.slices.push(reply.slice);
-        if (job.slices.length < this.workers.length) return;
+        job.doneBefore += reply.slice.status.length;
+        job.progress[worker] = 0;
+        this.handOut(job, worker);
+        if (job.slices.length < job.chunks) return;
         const slices = job.slices;
         job.slices = [];
         // The slices' buffers move on to the first worker; the page keeps no copy.

@@ -6,6 +6,7 @@ import { screenParts } from "../../src/engine/screenParts.ts";
 import type { Spec } from "../../src/engine/types.ts";
 import { RankingClient } from "../../src/worker/rankingClient.ts";
 import type { Ranking } from "../../src/worker/finishRanking.ts";
+import type { RankRequest } from "../../src/worker/protocol.ts";
 import { FakeRankWorker } from "./fakeWorkers.ts";
 
 const spec = (parseSpec(JSON.parse(readFileSync("sample-parts/demo-spec.json", "utf8"))) as { ok: true; spec: Spec }).spec;
@@ -44,6 +45,42 @@ describe("RankingClient", () => {
     const whole = screenParts(spec, parts);
     expect(Array.from(events.ranked[0]![1].order)).toEqual(Array.from(whole.order));
     expect(events.progress.at(-1)).toBe(parts.length);
+  });
+
+  it("RankingClient hands a long list out in ranges as workers come back and still ranks like screenParts", async () => {
+    // 20 copies of the demo list (6 160 parts) make several ranges per worker.
+    const many = Array.from({ length: 20 }, (_, copy) => parts.map((p) => ({ ...p, partNumber: `${p.partNumber}-${copy}` }))).flat();
+    const workers = Array.from({ length: 2 }, () => new FakeRankWorker());
+    const screened: number[][] = workers.map(() => []);
+    workers.forEach((w, k) => {
+      const post = w.postMessage.bind(w);
+      w.postMessage = (message: RankRequest) => {
+        if (message.type === "screen") screened[k]!.push(message.to - message.from);
+        post(message);
+      };
+    });
+    let ranked: Ranking | null = null;
+    let resolve: () => void = () => {};
+    const done = new Promise<void>((r) => (resolve = r));
+    const progress: number[] = [];
+    const c = new RankingClient(workers, {
+      onProgress: (_job, d) => progress.push(d),
+      onRanked: (_job, r) => {
+        ranked = r;
+        resolve();
+      },
+      onFailed: (_job, message) => {
+        throw new Error(message);
+      },
+    });
+    void c.sendList("a", "many", many);
+    void c.setCatalog(1, ["a"]);
+    c.rank(spec, 1, many.length);
+    await done;
+    expect(screened.flat().length).toBeGreaterThan(2);
+    expect(screened.flat().reduce((a, b) => a + b, 0)).toBe(many.length);
+    expect(Array.from(ranked!.order)).toEqual(Array.from(screenParts(spec, many).order));
+    expect(Math.max(...progress)).toBe(many.length);
   });
 
   it("RankingClient.rank supersedes a running job: only the newest one is reported", async () => {
