@@ -309,8 +309,7 @@ export class RollOffCurve implements FluxCurve {
   /** Locates |y| in the table; y beyond the table is clamped to its end. */
   private locate(yAbs: number): void {
     if (yAbs === this.lastY) return;
-    const t = this.table;
-    const u = t.uniform;
+    const u = this.table.uniform;
     if (yAbs < u.yLimit) {
       const position = yAbs * u.inverseStep;
       const k = Math.floor(position);
@@ -322,6 +321,13 @@ export class RollOffCurve implements FluxCurve {
       this.grid = u.packed;
       return;
     }
+    // Kept apart so that the common case above stays small enough for V8 to inline.
+    this.locateSearched(yAbs);
+  }
+
+  /** Past the uniform grid: a bucketed binary search of the grid in x. */
+  private locateSearched(yAbs: number): void {
+    const t = this.table;
     this.grid = t.packed;
     const yc = yAbs >= t.yMax ? t.yMax : yAbs;
     const b = Math.floor(yc * t.bucketScale);
@@ -364,10 +370,10 @@ export class RollOffCurve implements FluxCurve {
     const hy = this.lastHy;
     const s2 = s * s;
     const s3 = s2 * s;
-    // The cubic Hermite basis, shared by the four quantities (g' = x, h' = x²).
-    const b00 = 2 * s3 - 3 * s2 + 1;
+    // The cubic Hermite basis, shared by the three quantities (g' = x, h' = x²).
+    const b01 = 3 * s2 - 2 * s3;
+    const b00 = 1 - b01;
     const b10 = (s3 - 2 * s2 + s) * hy;
-    const b01 = -2 * s3 + 3 * s2;
     const b11 = (s3 - s2) * hy;
     const x0 = d[o]!;
     const m0 = d[o + 1]!;
@@ -376,12 +382,14 @@ export class RollOffCurve implements FluxCurve {
     const x = b00 * x0 + b10 * m0 + b01 * x1 + b11 * m1;
     const g = b00 * d[o + 2]! + b10 * x0 + b01 * d[o + 6]! + b11 * x1;
     const h = b00 * d[o + 3]! + b10 * x0 * x0 + b01 * d[o + 7]! + b11 * x1 * x1;
-    const dxdy = (6 * s2 - 6 * s) * (x0 - x1) * this.lastInverseHy + (3 * s2 - 4 * s + 1) * m0 + (3 * s2 - 2 * s) * m1;
+    const ik = this.ik;
     // x and h are odd in y, g and dx/dy even.
-    this.sampleCurrent = (negative ? -x : x) * this.ik;
+    this.sampleCurrent = negative ? -x * ik : x * ik;
     this.sampleIntegral = g * this.gScale;
-    this.sampleSquare = (negative ? -h : h) * this.hScale;
-    this.sampleSlope = dxdy * this.ik * this.inverseLambdaScale;
+    this.sampleSquare = negative ? -h * this.hScale : h * this.hScale;
+    // dx/dy linear between the nodes: only the tangent steps of a converged Newton use it, where
+    // its O(h²) error is multiplied by a step under 1e-5 of the flux.
+    this.sampleSlope = (m0 + s * (m1 - m0)) * ik * this.inverseLambdaScale;
   }
 
   current(lambda: number): number {
