@@ -52,9 +52,8 @@ export function finishRanking(spec: Spec, parts: readonly Part[], slices: readon
     unreachable: all.unreachable,
   });
   const rankOf = new Int32Array(parts.length);
-  ranked.order.forEach((index, k) => {
-    rankOf[index] = k;
-  });
+  const order = ranked.order;
+  for (let k = 0; k < order.length; k++) rankOf[order[k]!] = k;
   let passCount = 0;
   const pass = STATUS_CODES.indexOf("pass");
   for (const code of all.status) if (code === pass) passCount++;
