@@ -2,7 +2,7 @@ import type { CornerPoint, CornerResult, Part, Spec } from "./types.ts";
 import { ConstantInductance, type FluxCurve, RollOffCurve, knee } from "./fluxCurve.ts";
 import { emptySolution, type OperatingPoint, solveWaveform, type WaveformSolution } from "./solveWaveform.ts";
 import { COPPER_ALPHA20, copperResistance } from "./copper.ts";
-import { RUNAWAY_TEMPERATURE, type ThermalBalance, isatAtTemperature, ratedHeatingPower, settleTemperature } from "./thermal.ts";
+import { RUNAWAY_TEMPERATURE, type ThermalBalance, isatAtTemperature, isatFromSlope, isatSlopePerKelvin, ratedHeatingPower, settleTemperature } from "./thermal.ts";
 import { idealDuty, inductorCurrentCcm } from "./segmentVoltages.ts";
 import { igseTwoRamp } from "./coreLoss.ts";
 
@@ -27,6 +27,8 @@ export interface PreparedPart {
   inverseRatedPower: number;
   /** Knee current of the roll-off law at 25 °C, null for constant L. */
   knee25: number | null;
+  /** dIsat/dT above 25 °C (0 without a hot rating), see isatAtTemperature. */
+  isatSlope: number;
   /** knee25/Isat: Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C. */
   kneePerIsat: number;
 }
@@ -46,6 +48,7 @@ export function preparePart(part: Part): PreparedPart {
     ratedPower,
     inverseRatedPower: ratedPower === null ? 1 : 1 / ratedPower,
     knee25: part.isat === null ? null : knee(part.isat, part.isatDrop, part.rollOffExponent),
+    isatSlope: isatSlopePerKelvin(part),
     kneePerIsat: part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent),
   };
 }
@@ -172,12 +175,9 @@ export class CornerSolver {
     if (thermal && part === this.guessPart && slot >= 0) {
       temperature = this.guessTemperature[slot]!;
     } else if (thermal) {
-      // Start from the rise that the DC part of the inductor current alone would cause.
-      const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
-      balance.copperLossAt20 = il * il * dcr20;
-      temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+      temperature = this.coldStart(vin, iout, dcr20);
     }
-    let isatSolved = isatAtTemperature(part, temperature);
+    let isatSolved = isatFromSlope(part.isat, prepared.isatSlope, temperature);
     this.setCurve(prepared, inductance, isatSolved);
     op.vin = vin;
     op.iout = iout;
@@ -194,7 +194,7 @@ export class CornerSolver {
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
       dcrHot = resistanceAt(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
-      const isatNow = isatSolved === null ? null : isatAtTemperature(part, temperature);
+      const isatNow = isatFromSlope(part.isat, prepared.isatSlope, temperature);
       const isatShift = isatNow === null || isatSolved === null || isatNow === isatSolved ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
       const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
       if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
@@ -219,9 +219,21 @@ export class CornerSolver {
     this.acLoss = dcrHot === null ? 0 : acLossFactor(solution, part.acFactor) * dcrHot;
     this.coreLoss = core;
     this.totalLoss = this.dcrLoss + this.acLoss + (core ?? 0);
-    this.isatAtTemp = isatAtTemperature(part, temperature);
+    this.isatAtTemp = isatFromSlope(part.isat, prepared.isatSlope, temperature);
     this.irms = Math.sqrt(solution.meanSquare);
     this.ripple = ripple;
+  }
+
+  /**
+   * First temperature guess of a part at a load: the rise that the DC part of the inductor
+   * current alone would cause. Apart from solve() because it runs at two corners in eighteen,
+   * and V8 inlines a limited amount into one function: the hot path gets that budget.
+   */
+  private coldStart(vin: number, iout: number, dcr20: number): number {
+    const { spec, balance } = this;
+    const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
+    balance.copperLossAt20 = il * il * dcr20;
+    return Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
   }
 
   /** Forgets the warm start, so that a part's corners come out the same whichever part came before. */

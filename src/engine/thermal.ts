@@ -31,11 +31,19 @@ export function ratedHeatingPower(part: Part): number | null {
  * linearly with temperature, from memory), never below a twentieth of Isat.
  */
 export function isatAtTemperature(part: Part, tC: number): number | null {
-  if (part.isat === null) return null;
-  if (part.isatHot === null || part.isatHotTemp === null || part.isatHotTemp <= 25) return part.isat;
-  if (tC <= 25) return part.isat;
-  const slope = (part.isatHot - part.isat) / (part.isatHotTemp - 25);
-  return Math.max(part.isat * 0.05, part.isat + slope * (tC - 25));
+  return isatFromSlope(part.isat, isatSlopePerKelvin(part), tC);
+}
+
+/** dIsat/dT above 25 °C from the hot rating, 0 when the list gives none. */
+export function isatSlopePerKelvin(part: Part): number {
+  if (part.isat === null || part.isatHot === null || part.isatHotTemp === null || part.isatHotTemp <= 25) return 0;
+  return (part.isatHot - part.isat) / (part.isatHotTemp - 25);
+}
+
+/** isatAtTemperature from Isat at 25 °C and its slope (kept small: it sits on the ranking's hot path). */
+export function isatFromSlope(isat: number | null, slopePerKelvin: number, tC: number): number | null {
+  if (isat === null || slopePerKelvin === 0 || tC <= 25) return isat;
+  return Math.max(isat * 0.05, isat + slopePerKelvin * (tC - 25));
 }
 
 const NEWTON_STEP_K = 1;
