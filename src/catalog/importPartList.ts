@@ -9,7 +9,7 @@ import { parseMappingOverride } from "./parseMappingOverride.ts";
 import { makeRowConverter } from "./makeRowConverter.ts";
 import { parseUnit } from "./parseUnit.ts";
 import { QUANTITIES } from "./quantities.ts";
-import { blankComments, previewRecords, readRecords } from "./readRecords.ts";
+import { blankComments, previewRecords, readRecords, recordsAtLines } from "./readRecords.ts";
 import type { ColumnMapping, Dimension, ImportOptions, ImportResult, MappingOverride, RejectedRow, RowWarning } from "./types.ts";
 
 export { decodeText } from "./decodeText.ts";
@@ -152,7 +152,9 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
   const kept: (Part | null)[] = [];
   const keptRows: number[] = [];
   const keptExtra: (Record<string, string> | null)[] = [];
-  const keptCells: string[][] = [];
+  // A replaced duplicate's cells are read again from the text at the end, not kept for every row:
+  // holding 100 000 rows of cells until then would double the import's garbage-collection work.
+  const cellsToRead: { rejected: number; line: number }[] = [];
   const seen = new KeyIndex();
   const rejected: RejectedRow[] = [];
   let dataRows = 0;
@@ -187,19 +189,19 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
           field: "partNumber",
           header: map.names[pnColumn] ?? null,
           reason: `duplicate part number "${result.partNumber}": replaced by line ${line}, later in the list`,
-          cells: keptCells[earlier] as string[],
+          cells: [],
         });
-        keptCells[earlier] = [];
+        cellsToRead.push({ rejected: rejected.length - 1, line: earlierRow });
         warnings.push({ row: line, field: "partNumber", message: `${result.partNumber}: duplicate part number; this later row replaces line ${earlierRow}` });
       }
       seen.set(result.partNumber, kept.length);
       kept.push(result);
       keptRows.push(line);
       keptExtra.push(extra);
-      // Cells are kept only while a later duplicate could still need them for its report.
-      keptCells.push(cells);
     }
   }, preview.linebreak);
+  const reread = recordsAtLines(input, delimiter, cellsToRead.map((c) => c.line), preview.linebreak);
+  for (const c of cellsToRead) (rejected[c.rejected] as RejectedRow).cells = reread.get(c.line) ?? [];
   for (const p of problems) warnings.push({ row: p.line, field: null, message: p.message });
 
   const parts: Part[] = [];

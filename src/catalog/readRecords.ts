@@ -120,3 +120,27 @@ export function readRecords(text: string, delimiter: string, onChunk: (chunk: Re
   });
   return problems;
 }
+
+/**
+ * The records that start on the given 1-based lines (as readRecords numbers them), read again
+ * from the text: one pass to find where those lines start, then one short parse for each.
+ */
+export function recordsAtLines(text: string, delimiter: string, lines: readonly number[], linebreak: string): Map<number, string[]> {
+  const out = new Map<number, string[]>();
+  if (lines.length === 0) return out;
+  const wanted = [...new Set(lines)].sort((a, b) => a - b);
+  const newline = newlineOf(linebreak);
+  let line = 1;
+  let at = 0;
+  for (const target of wanted) {
+    while (line < target) {
+      const next = text.indexOf(newline, at);
+      if (next < 0) return out;
+      at = next + 1;
+      line++;
+    }
+    const parsed = Papa.parse<string[]>(text.slice(at), { delimiter, newline: linebreak as "\r" | "\n" | "\r\n", skipEmptyLines: false, preview: 1 });
+    out.set(target, parsed.data[0] ?? []);
+  }
+  return out;
+}

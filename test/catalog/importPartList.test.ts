@@ -122,6 +122,17 @@ describe("importPartList", () => {
     expect(r.warnings.some((w) => w.row === 4 && /duplicate/.test(w.message))).toBe(true);
   });
 
+  it("importPartList gives a replaced duplicate its own cells, also after a multi-line cell, CRLF ends and a third copy", () => {
+    const text = `Part,L (uH),DCR (mOhm),Isat (A),Note\r\nB1,4.7,45,3.2,"two\r\nlines"\r\nB2,10,80,2,x\r\nb1,6.8,60,2.8,y\r\nB1,3.3,30,4,z\r\n`;
+    const r = importPartList(text);
+    balanced(r);
+    expect(r.parts.map((p) => p.partNumber)).toEqual(["B2", "B1"]);
+    expect(r.rejected.map((x) => [x.row, x.cells])).toEqual([
+      [2, ["B1", "4.7", "45", "3.2", "two\r\nlines"]],
+      [5, ["b1", "6.8", "60", "2.8", "y"]],
+    ]);
+  });
+
   it("importPartList keeps unrecognised columns as extra cells and lists them in the mapping", () => {
     const r = importPartList("Part Number,Inductance (uH),Stock,Notes\nA1,4.7,1200,low profile\nA2,10,,\n");
     expect(r.extra["A1"]).toEqual({ Stock: "1200", Notes: "low profile" });
