@@ -152,8 +152,8 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
   const kept: (Part | null)[] = [];
   const keptRows: number[] = [];
   const keptExtra: (Record<string, string> | null)[] = [];
-  // A replaced duplicate's cells are read again from the text at the end, not kept for every row:
-  // holding 100 000 rows of cells until then would double the import's garbage-collection work.
+  // A replaced duplicate's cells are read again from the text at the end rather than every row's
+  // cells being held until then (100 000 rows of them in memory, for the few that need them).
   const cellsToRead: { rejected: number; line: number }[] = [];
   const seen = new KeyIndex();
   const rejected: RejectedRow[] = [];

@@ -1,7 +1,7 @@
 import type { CornerPoint, CornerResult, Part, Spec } from "./types.ts";
 import { ConstantInductance, type FluxCurve, RollOffCurve, knee } from "./fluxCurve.ts";
 import { emptySolution, type OperatingPoint, solveWaveform, type WaveformSolution } from "./solveWaveform.ts";
-import { COPPER_ALPHA20, copperResistance } from "./copper.ts";
+import { copperResistance, resistanceFrom20 } from "./copper.ts";
 import { RUNAWAY_TEMPERATURE, type ThermalBalance, isatAtTemperature, isatFromSlope, isatSlopePerKelvin, ratedHeatingPower, settleTemperature } from "./thermal.ts";
 import { idealDuty, inductorCurrentCcm } from "./segmentVoltages.ts";
 import { igseTwoRamp } from "./coreLoss.ts";
@@ -18,18 +18,14 @@ const ISAT_TOLERANCE = 1e-3;
 /** Per-part constants shared by all of a part's corners. */
 export interface PreparedPart {
   part: Part;
-  /** DCR used for losses, Ω at part.dcrTemp. */
-  dcrRef: number | null;
-  /** The same winding at 20 °C, where IEC 60028 states α20: R(T) = dcr20·(1 + α20·(T − 20)). */
+  /** DCR used for losses (lossDcr) referred to 20 °C, where IEC 60028 states α20. */
   dcr20: number | null;
   ratedPower: number | null;
   /** 1/ratedPower (1 when unrated), formed once per part. */
   inverseRatedPower: number;
-  /** Knee current of the roll-off law at 25 °C, null for constant L. */
-  knee25: number | null;
   /** dIsat/dT above 25 °C (0 without a hot rating), see isatAtTemperature. */
   isatSlope: number;
-  /** knee25/Isat: Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C. */
+  /** Ik/Isat of the roll-off law (NaN without an Isat): Ik scales with Isat, hot or not. */
   kneePerIsat: number;
 }
 
@@ -43,28 +39,20 @@ export function preparePart(part: Part): PreparedPart {
   const ratedPower = ratedHeatingPower(part);
   return {
     part,
-    dcrRef,
     dcr20: dcrRef === null ? null : copperResistance(dcrRef, part.dcrTemp, 20),
     ratedPower,
     inverseRatedPower: ratedPower === null ? 1 : 1 / ratedPower,
-    knee25: part.isat === null ? null : knee(part.isat, part.isatDrop, part.rollOffExponent),
     isatSlope: isatSlopePerKelvin(part),
     kneePerIsat: part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent),
   };
 }
 
-/** Winding resistance at tC from its value at 20 °C (IEC 60028, α20 = 0.00393 /K). */
-function resistanceAt(dcr20: number, tC: number): number {
-  return dcr20 * (1 + COPPER_ALPHA20 * (tC - 20));
-}
-
 /** Flux curve of a part at one inductance corner and temperature (constant L when Isat is unknown). */
-export function partCurve(part: Part, inductance: number, temperature: number, knee25?: number | null): FluxCurve {
+export function partCurve(part: Part, inductance: number, temperature: number): FluxCurve {
   const isat = isatAtTemperature(part, temperature);
   if (isat === null) return new ConstantInductance(inductance);
-  // Ik scales with Isat, so a hot Isat only rescales the knee found at 25 °C.
-  const k25 = knee25 ?? knee(part.isat as number, part.isatDrop, part.rollOffExponent);
-  return new RollOffCurve(inductance, (k25 * isat) / (part.isat as number), part.rollOffExponent);
+  // Ik scales with Isat, so a hot Isat only rescales the knee; the same product as the solver's.
+  return new RollOffCurve(inductance, knee(1, part.isatDrop, part.rollOffExponent) * isat, part.rollOffExponent);
 }
 
 /** Core loss in W by iGSE, null when the part carries no core-loss data. */
@@ -151,7 +139,7 @@ export class CornerSolver {
 
   private setCurve(prepared: PreparedPart, inductance: number, isat: number | null): void {
     const part = prepared.part;
-    if (isat === null || prepared.knee25 === null) {
+    if (isat === null) {
       this.curve = this.constantCurve.set(inductance);
     } else {
       this.curve = this.rollOffCurve.set(inductance, prepared.kneePerIsat * isat, part.rollOffExponent);
@@ -181,7 +169,7 @@ export class CornerSolver {
     this.setCurve(prepared, inductance, isatSolved);
     op.vin = vin;
     op.iout = iout;
-    op.drops.dcr = dcr20 === null ? 0 : resistanceAt(dcr20, temperature);
+    op.drops.dcr = dcr20 === null ? 0 : resistanceFrom20(dcr20, temperature);
     const solution = solveWaveform(op, this.curve, this.solution);
     let dcrHot = dcr20 === null ? null : op.drops.dcr;
     let core = coreLossOf(part, solution, spec.fsw);
@@ -192,7 +180,7 @@ export class CornerSolver {
       balance.otherLoss = core ?? 0;
       balance.start = temperature;
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
-      dcrHot = resistanceAt(dcr20, temperature);
+      dcrHot = resistanceFrom20(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
       const isatNow = isatFromSlope(part.isat, prepared.isatSlope, temperature);
       const isatShift = isatNow === null || isatSolved === null || isatNow === isatSolved ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;

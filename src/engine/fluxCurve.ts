@@ -17,8 +17,6 @@ export interface FluxCurve {
   squareIntegral(lambda: number): number;
   /** Flux linkage at current i. */
   flux(current: number): number;
-  /** di/dλ at flux linkage λ (the inverse of the differential inductance there). */
-  currentSlope(lambda: number): number;
   /**
    * Flux linkage at the centre of a ramp of swing Δλ whose mean current is i, to second order:
    * mean ≈ i(λc) + i''(λc)·Δλ²/24 (Taylor expansion about the centre).
@@ -27,8 +25,9 @@ export interface FluxCurve {
   /** Differential inductance dλ/di at current i. */
   inductanceAt(current: number): number;
   /**
-   * Evaluates current, currentIntegral, squareIntegral and currentSlope at λ together (one
-   * lookup) into the four sample fields: the solver's Newton steps need all of them at once.
+   * Evaluates current, currentIntegral and squareIntegral at λ together (one lookup) into the
+   * sample fields, with di/dλ (exact for constant L, linear between table nodes for roll-off):
+   * the solver's Newton steps need all of them at once.
    */
   sample(lambda: number): void;
   readonly sampleCurrent: number;
@@ -80,9 +79,6 @@ export class ConstantInductance implements FluxCurve {
   flux(current: number): number {
     return current * this.inductance;
   }
-  currentSlope(): number {
-    return this.inverseL;
-  }
   rampCentre(current: number): number {
     return current * this.inductance;
   }
@@ -93,8 +89,8 @@ export class ConstantInductance implements FluxCurve {
 
 /**
  * Normalised tables of one roll-off exponent, on a uniform grid in x. The evaluations read
- * `packed` copies that hold each node's values side by side ([x, dx/dy, g, h] per node; [y, dx/dy]
- * for the grid in x), so that a lookup touches one or two cache lines rather than one per array.
+ * `packed` copies that hold each node's values side by side ([x, dx/dy, g, h] per node;
+ * [y, step·dy/dx, dx/dy] for the grid in x), so that a lookup touches one or two cache lines rather than one per array.
  */
 interface RollOffTable {
   n: number;
@@ -399,17 +395,6 @@ export class RollOffCurve implements FluxCurve {
     const d = this.grid;
     const x = this.hermite(d[o]!, d[o + 4]!, d[o + 1]!, d[o + 5]!);
     return (y < 0 ? -x : x) * this.ik;
-  }
-
-  currentSlope(lambda: number): number {
-    const y = lambda * this.inverseLambdaScale;
-    this.locate(y < 0 ? -y : y);
-    const o = this.lastOffset;
-    const d = this.grid;
-    const s = this.lastT;
-    // Derivative of the cubic Hermite that current() evaluates; dx/dy is even in y.
-    const dxdy = (6 * s * s - 6 * s) * (d[o]! - d[o + 4]!) * this.lastInverseHy + (3 * s * s - 4 * s + 1) * d[o + 1]! + (3 * s * s - 2 * s) * d[o + 5]!;
-    return dxdy * this.ik * this.inverseLambdaScale;
   }
 
   rampCentre(current: number, swing: number): number {

@@ -228,7 +228,7 @@ export function rankFigures(spec: Spec, parts: readonly Part[], figures: PartFig
     reference[i] = !anyPass || pass ? 1 : 0;
     // A part that cannot reach the output at some corner has no meaningful loss figure.
     loss[i] = unreachable[i] ? NaN : totalLoss[i]!;
-    const counted = pass || status[i] === "incomplete";
+    const counted = status[i] !== "fail";
     frontLoss[i] = counted ? totalLoss[i]! : NaN;
     frontVolume[i] = counted ? partVolume[i]! : NaN;
   }

@@ -58,6 +58,58 @@ describe("RollOffCurve(n = 2) against the closed form", () => {
   });
 });
 
+// sample(λ) against the n = 2 closed form above (i = Ik·tan y, G = L0·Ik²·(−ln cos y),
+// H = L0·Ik³·(tan y − y), di/dλ = (1 + tan² y)/L0; calculus, common practice).
+describe("RollOffCurve.sample against the closed form (n = 2)", () => {
+  const l0 = 4.7e-6;
+  const ik = 12;
+  const curve = new RollOffCurve(l0, ik, 2);
+  for (const y of [0.02, 0.6, 1.1, 1.45, -0.9]) {
+    it(`sample at y = ${y} gives i, ∫i dλ, ∫i² dλ and di/dλ of the closed form`, () => {
+      curve.sample(y * l0 * ik);
+      const t = Math.tan(y);
+      expect(curve.sampleCurrent / (ik * t)).toBeCloseTo(1, 6);
+      expect(curve.sampleIntegral / (l0 * ik * ik * -Math.log(Math.cos(y)))).toBeCloseTo(1, 6);
+      expect(curve.sampleSquare / (l0 * ik ** 3 * (t - y))).toBeCloseTo(1, 5);
+      // Linear between nodes: within a part in 1e5 where the slope stays below 64.
+      expect(curve.sampleSlope / ((1 + t * t) / l0)).toBeCloseTo(1, 4);
+    });
+  }
+
+  it("ConstantInductance.sample gives λ/L, λ²/2L, λ³/3L² and 1/L", () => {
+    const c = new ConstantInductance(2e-6);
+    c.sample(3e-6);
+    expect(c.sampleCurrent).toBeCloseTo(1.5, 12);
+    expect(c.sampleIntegral).toBeCloseTo(2.25e-6, 18);
+    expect(c.sampleSquare).toBeCloseTo(2.25e-6, 18);
+    expect(c.sampleSlope).toBeCloseTo(5e5, 6);
+  });
+});
+
+// The mean of i over a ramp centred on λc is i(λc) + i''(λc)·Δλ²/24 + O(Δλ⁴) (Taylor, common
+// practice), so rampCentre's point is closer to the ramp that averages I than λ(I) is.
+describe("RollOffCurve.rampCentre", () => {
+  it("rampCentre puts the mean of a ramp nearer the target current than λ(I) does", () => {
+    const l0 = 4.7e-6;
+    const ik = 12;
+    const curve = new RollOffCurve(l0, ik, 2);
+    const mean = (centre: number, swing: number) =>
+      (curve.currentIntegral(centre + swing / 2) - curve.currentIntegral(centre - swing / 2)) / swing;
+    for (const [current, swing] of [
+      [8, 3e-6],
+      [14, 2e-5],
+    ] as const) {
+      const naive = Math.abs(mean(curve.flux(current), swing) - current);
+      const second = Math.abs(mean(curve.rampCentre(current, swing), swing) - current);
+      expect(second).toBeLessThan(naive / 10);
+    }
+  });
+
+  it("rampCentre is λ = L·I for constant L", () => {
+    expect(new ConstantInductance(2e-6).rampCentre(3, 1e-6)).toBeCloseTo(6e-6, 18);
+  });
+});
+
 describe("solver with roll-off", () => {
   it("solveWaveform(buck 12→3.3 V, 5 A, n = 2, I0 = 12 A) gives the nonlinear ripple 1.195 A from ∫L di = V·t", () => {
     const c = solve(
