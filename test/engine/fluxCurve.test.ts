@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ConstantInductance, RollOffCurve, knee, rollOffRatio } from "../../src/engine/fluxCurve.ts";
+import { ConstantInductance, type FluxCurve, RollOffCurve, knee, rollOffRatio } from "../../src/engine/fluxCurve.ts";
 import { solve } from "./helpers.ts";
 
 // Rational roll-off L(I) = L0/(1 + (I/I0)^n), I0 = Isat·(x/(1 − x))^(−1/n) (REFERENCES.md §7;
@@ -106,7 +106,8 @@ describe("RollOffCurve.rampCentre", () => {
   });
 
   it("rampCentre is λ = L·I for constant L", () => {
-    expect(new ConstantInductance(2e-6).rampCentre(3, 1e-6)).toBeCloseTo(6e-6, 18);
+    const curve: FluxCurve = new ConstantInductance(2e-6);
+    expect(curve.rampCentre(3, 1e-6)).toBeCloseTo(6e-6, 18);
   });
 });
 
