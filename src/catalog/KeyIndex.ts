@@ -16,8 +16,9 @@ export class KeyIndex {
   }
 
   get(key: string): number | undefined {
-    const k = fold(key);
-    const h = hash(k);
+    let k = key;
+    let h = asciiHash(key);
+    if (h < 0) h = hash((k = key.toUpperCase()));
     for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
       const e = this.slots[s] as number;
       if (e === 0) return undefined;
@@ -26,8 +27,14 @@ export class KeyIndex {
   }
 
   set(key: string, value: number): void {
-    const k = fold(key);
-    const h = hash(k);
+    this.put(key, value);
+  }
+
+  /** Sets the key's value and returns the one it replaces (undefined for a new key): one hash for both. */
+  put(key: string, value: number): number | undefined {
+    let k = key;
+    let h = asciiHash(key);
+    if (h < 0) h = hash((k = key.toUpperCase()));
     for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
       const e = this.slots[s] as number;
       if (e === 0) {
@@ -36,11 +43,12 @@ export class KeyIndex {
         this.values.push(value);
         this.slots[s] = this.keys.length;
         if (this.keys.length * 2 > this.mask) this.grow();
-        return;
+        return undefined;
       }
       if (this.hashes[e - 1] === h && sameFolded(this.keys[e - 1] as string, k)) {
+        const earlier = this.values[e - 1];
         this.values[e - 1] = value;
-        return;
+        return earlier;
       }
     }
   }
@@ -57,13 +65,19 @@ export class KeyIndex {
   }
 }
 
-function fold(key: string): string {
-  for (let i = 0; i < key.length; i++) if (key.charCodeAt(i) > 127) return key.toUpperCase();
-  return key;
-}
-
 function upper(c: number): number {
   return c >= 97 && c <= 122 ? c - 32 : c;
+}
+
+/** hash(key) for an ASCII key in one pass, -1 when the key holds another character (fold it first). */
+function asciiHash(key: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < key.length; i++) {
+    const c = key.charCodeAt(i);
+    if (c > 127) return -1;
+    h = Math.imul(h ^ upper(c), 0x01000193);
+  }
+  return h >>> 0;
 }
 
 /** FNV-1a over upper-cased ASCII. */

@@ -45,78 +45,110 @@ function show(q: Quantity, v: number): string {
  * Warnings, never rejections, for values that are possible but unlikely: outside the usual range
  * of inductor data or a thousand times off the list's median (4.7 H in a list of µH parts), and
  * contradictions between fields (DCR max below typical, hot Isat above cold Isat).
+ *
+ * Parts are added as they are made, while each is still in cache: a second pass over 100 000
+ * finished parts cost more than reading them here. Most lists have nothing to report, and the
+ * extremes gathered here say so without looking at a part again.
  */
-export function checkPlausibility(parts: Part[], rows: number[]): RowWarning[] {
-  const warnings: RowWarning[] = [];
-  const count = CHECKED.length;
-  // The median comes from evenly spaced parts, at most MEDIAN_SAMPLE of them: exact for short
-  // lists, and on 100 000 parts a sort of every value per field costs more than the import.
-  const stride = Math.max(1, Math.ceil(parts.length / MEDIAN_SAMPLE));
-  const positive: number[][] = CHECKED.map(() => []);
-  const n = new Int32Array(count);
-  let sampled = true;
-  const min = new Float64Array(count).fill(Infinity);
-  const max = new Float64Array(count).fill(-Infinity);
-  const minPositive = new Float64Array(count).fill(Infinity);
-  // One pass over the parts reads every field while the object is in cache; a pass per field
-  // was most of the cost on 100 000 parts.
-  const take = (k: number, v: number | null) => {
-    if (v === null) return;
-    if (v < (min[k] as number)) min[k] = v;
-    if (v > (max[k] as number)) max[k] = v;
-    if (v > 0) {
-      n[k] = (n[k] as number) + 1;
-      if (sampled) (positive[k] as number[]).push(v);
-      if (v < (minPositive[k] as number)) minPositive[k] = v;
+export class PlausibilityCheck {
+  private readonly min = new Float64Array(CHECKED.length).fill(Infinity);
+  private readonly max = new Float64Array(CHECKED.length).fill(-Infinity);
+  private readonly minPositive = new Float64Array(CHECKED.length).fill(Infinity);
+  private readonly positives = new Int32Array(CHECKED.length);
+  /** Every stride-th part added; the stride doubles when the sample grows past twice its size. */
+  private sample: Part[] = [];
+  private stride = 1;
+  private added = 0;
+  private readonly contradictions: { part: Part; row: number; field: "dcrMax" | "isatHot"; message: string }[] = [];
+
+  add(p: Part, row: number): void {
+    if (this.added++ % this.stride === 0) {
+      this.sample.push(p);
+      if (this.sample.length > 2 * MEDIAN_SAMPLE) {
+        // Keep the parts at multiples of the doubled stride: still evenly spaced.
+        this.sample = this.sample.filter((_, i) => i % 2 === 0);
+        this.stride *= 2;
+      }
     }
-  };
-  for (let i = 0; i < parts.length; i++) {
-    const p = parts[i] as Part;
-    sampled = i % stride === 0;
     // Written out in CHECKED order: fourteen direct reads, no indirect call per field.
-    take(0, p.inductance);
-    take(1, p.tolerance);
-    take(2, p.dcrTyp);
-    take(3, p.dcrMax);
-    take(4, p.isat);
-    take(5, p.isatDrop);
-    take(6, p.isatHot);
-    take(7, p.irms);
-    take(8, p.irmsRise);
-    take(9, p.srf);
-    take(10, p.length);
-    take(11, p.width);
-    take(12, p.height);
-    take(13, p.price);
+    this.take(0, p.inductance);
+    this.take(1, p.tolerance);
+    this.take(2, p.dcrTyp);
+    this.take(3, p.dcrMax);
+    this.take(4, p.isat);
+    this.take(5, p.isatDrop);
+    this.take(6, p.isatHot);
+    this.take(7, p.irms);
+    this.take(8, p.irmsRise);
+    this.take(9, p.srf);
+    this.take(10, p.length);
+    this.take(11, p.width);
+    this.take(12, p.height);
+    this.take(13, p.price);
     if (p.dcrTyp !== null && p.dcrMax !== null && p.dcrMax < p.dcrTyp) {
-      warnings.push({ row: rows[i] ?? null, field: "dcrMax", message: `${p.partNumber}: DCR maximum ${show("dcrMax", p.dcrMax)} is below typical ${show("dcrTyp", p.dcrTyp)}` });
+      this.contradictions.push({ part: p, row, field: "dcrMax", message: `${p.partNumber}: DCR maximum ${show("dcrMax", p.dcrMax)} is below typical ${show("dcrTyp", p.dcrTyp)}` });
     }
     if (p.isat !== null && p.isatHot !== null && p.isatHot > p.isat) {
-      warnings.push({ row: rows[i] ?? null, field: "isatHot", message: `${p.partNumber}: hot Isat ${show("isatHot", p.isatHot)} is above Isat at 25 °C ${show("isat", p.isat)}` });
+      this.contradictions.push({ part: p, row, field: "isatHot", message: `${p.partNumber}: hot Isat ${show("isatHot", p.isatHot)} is above Isat at 25 °C ${show("isat", p.isat)}` });
     }
   }
-  for (let k = 0; k < count; k++) {
-    const [q, get] = CHECKED[k] as [Quantity, (p: Part) => number | null];
-    const m = median(positive[k] as number[]);
-    const range = QUANTITIES[q].plausible;
-    const lo = range === null ? -Infinity : range[0];
-    const hi = range === null ? Infinity : range[1];
-    const checkMedian = m !== null && m > 0 && (n[k] as number) >= 3;
-    const farAtAll = checkMedian && ((max[k] as number) / (m as number) > MEDIAN_FACTOR || (m as number) / (minPositive[k] as number) > MEDIAN_FACTOR);
-    // Most lists have nothing to report: the extremes decide that without a second pass.
-    if ((min[k] as number) >= lo && (max[k] as number) <= hi && !farAtAll) continue;
-    for (let i = 0; i < parts.length; i++) {
-      const p = parts[i] as Part;
-      const v = get(p);
-      if (v === null) continue;
-      const outside = v < lo || v > hi;
-      const far = checkMedian && v > 0 && (v / (m as number) > MEDIAN_FACTOR || (m as number) / v > MEDIAN_FACTOR);
-      if (!outside && !far) continue;
-      const reasons: string[] = [];
-      if (outside) reasons.push(`outside the usual ${show(q, lo)} … ${show(q, hi)}`);
-      if (far) reasons.push(`far from the list's median of ${show(q, m as number)}`);
-      warnings.push({ row: rows[i] ?? null, field: q, message: `${p.partNumber}: ${QUANTITIES[q].label} ${show(q, v)} is ${reasons.join(" and ")}; check the unit` });
+
+  /**
+   * The warnings for `parts` (with their rows), which are the parts added less any replaced
+   * since: contradictions first in the order added, then each field's outliers. The median
+   * comes from the evenly spaced sample (exact up to 2 × MEDIAN_SAMPLE parts): on 100 000 parts
+   * a sort of every value per field costs more than the import.
+   */
+  warnings(parts: readonly Part[], rows: readonly number[]): RowWarning[] {
+    const warnings: RowWarning[] = [];
+    if (this.contradictions.length > 0) {
+      const present = parts.length === this.added ? null : new Set(parts);
+      for (const c of this.contradictions) if (present === null || present.has(c.part)) warnings.push({ row: c.row, field: c.field, message: c.message });
+    }
+    for (let k = 0; k < CHECKED.length; k++) {
+      const [q, get] = CHECKED[k] as [Quantity, (p: Part) => number | null];
+      const values: number[] = [];
+      for (const p of this.sample) {
+        const v = get(p);
+        if (v !== null && v > 0) values.push(v);
+      }
+      const m = median(values);
+      const range = QUANTITIES[q].plausible;
+      const lo = range === null ? -Infinity : range[0];
+      const hi = range === null ? Infinity : range[1];
+      const checkMedian = m !== null && m > 0 && (this.positives[k] as number) >= 3;
+      const farAtAll = checkMedian && ((this.max[k] as number) / (m as number) > MEDIAN_FACTOR || (m as number) / (this.minPositive[k] as number) > MEDIAN_FACTOR);
+      if ((this.min[k] as number) >= lo && (this.max[k] as number) <= hi && !farAtAll) continue;
+      for (let i = 0; i < parts.length; i++) {
+        const p = parts[i] as Part;
+        const v = get(p);
+        if (v === null) continue;
+        const outside = v < lo || v > hi;
+        const far = checkMedian && v > 0 && (v / (m as number) > MEDIAN_FACTOR || (m as number) / v > MEDIAN_FACTOR);
+        if (!outside && !far) continue;
+        const reasons: string[] = [];
+        if (outside) reasons.push(`outside the usual ${show(q, lo)} … ${show(q, hi)}`);
+        if (far) reasons.push(`far from the list's median of ${show(q, m as number)}`);
+        warnings.push({ row: rows[i] ?? null, field: q, message: `${p.partNumber}: ${QUANTITIES[q].label} ${show(q, v)} is ${reasons.join(" and ")}; check the unit` });
+      }
+    }
+    return warnings;
+  }
+
+  private take(k: number, v: number | null): void {
+    if (v === null) return;
+    if (v < (this.min[k] as number)) this.min[k] = v;
+    if (v > (this.max[k] as number)) this.max[k] = v;
+    if (v > 0) {
+      this.positives[k] = (this.positives[k] as number) + 1;
+      if (v < (this.minPositive[k] as number)) this.minPositive[k] = v;
     }
   }
-  return warnings;
+}
+
+/** PlausibilityCheck over a finished list of parts, each with its row. */
+export function checkPlausibility(parts: readonly Part[], rows: readonly number[]): RowWarning[] {
+  const check = new PlausibilityCheck();
+  for (let i = 0; i < parts.length; i++) check.add(parts[i] as Part, rows[i] ?? 0);
+  return check.warnings(parts, rows);
 }

@@ -11,10 +11,15 @@ export interface HeaderLocation {
 
 const HEADER_SEARCH = 30;
 
+/** A printable ASCII character: never white space, so a cell starting with one is not blank. */
+export function isVisibleAscii(code: number): boolean {
+  return code > 32 && code < 127;
+}
+
 export function isBlank(row: string[]): boolean {
   for (const cell of row) {
     // Most cells start with a visible character: decide without allocating a trimmed copy.
-    if (cell.length > 0 && (cell.charCodeAt(0) > 32 || cell.trim() !== "")) return false;
+    if (cell.length > 0 && (isVisibleAscii(cell.charCodeAt(0)) || cell.trim() !== "")) return false;
   }
   return true;
 }

@@ -1,5 +1,5 @@
 import type { Part } from "../engine/types.ts";
-import { checkPlausibility } from "./checkPlausibility.ts";
+import { PlausibilityCheck } from "./checkPlausibility.ts";
 import { detectDecimalComma } from "./detectDecimalComma.ts";
 import { detectDelimiter } from "./detectDelimiter.ts";
 import { findHeaderRow, isBlank } from "./findHeaderRow.ts";
@@ -9,7 +9,9 @@ import { parseMappingOverride } from "./parseMappingOverride.ts";
 import { makeRowConverter } from "./makeRowConverter.ts";
 import { parseUnit } from "./parseUnit.ts";
 import { QUANTITIES } from "./quantities.ts";
-import { blankComments, previewRecords, readRecords, recordsAtLines } from "./readRecords.ts";
+import { blankComments, previewRecords, readRecords, recordsAtLines, type RecordProblem } from "./readRecords.ts";
+import { RecordCells } from "./RecordCells.ts";
+import { scanRecords } from "./scanRecords.ts";
 import type { ColumnMapping, Dimension, ImportOptions, ImportResult, MappingOverride, RejectedRow, RowWarning } from "./types.ts";
 
 export { decodeText } from "./decodeText.ts";
@@ -90,6 +92,61 @@ function guessUnits(rows: string[][], dataIdx: number[], plans: ColumnPlan[], ma
   }
 }
 
+type RowConverter = ReturnType<typeof makeRowConverter>;
+
+/** What the data rows of one list come to, row by row: kept parts, rejected rows, replaced duplicates. */
+function collectRows(names: readonly string[], pnColumn: number, extraColumns: readonly number[]) {
+  const columnCount = names.length;
+  const kept: (Part | null)[] = [];
+  const keptRows: number[] = [];
+  const keptExtra: (Record<string, string> | null)[] = [];
+  // A replaced duplicate's cells are read again from the text at the end rather than every row's
+  // cells being held until then (100 000 rows of them in memory, for the few that need them).
+  const cellsToRead: { rejected: number; line: number }[] = [];
+  const seen = new KeyIndex();
+  const rejected: RejectedRow[] = [];
+  const warnings: RowWarning[] = [];
+  const plausibility = new PlausibilityCheck();
+  const state = { kept, keptRows, keptExtra, cellsToRead, rejected, warnings, plausibility, dataRows: 0, add };
+  function add(cells: RecordCells, convert: RowConverter): void {
+    state.dataRows++;
+    const line = cells.line;
+    const result = convert(cells, warnings);
+    if (!("partNumber" in result)) {
+      rejected.push({ row: line, field: result.field, header: result.header, reason: result.reason, cells: cells.cells() });
+      return;
+    }
+    let extra: Record<string, string> | null = null;
+    for (const c of extraColumns) {
+      const cell = cells.cell(c);
+      if (cell.trim() !== "") (extra ??= Object.create(null) as Record<string, string>)[names[c] as string] = cell;
+    }
+    for (let c = columnCount; c < cells.count; c++) {
+      const cell = cells.cell(c);
+      if (cell.trim() !== "") (extra ??= Object.create(null) as Record<string, string>)[`column ${c + 1}`] = cell;
+    }
+    const earlier = seen.put(result.partNumber, kept.length);
+    if (earlier !== undefined) {
+      const earlierRow = keptRows[earlier] as number;
+      kept[earlier] = null;
+      rejected.push({
+        row: earlierRow,
+        field: "partNumber",
+        header: names[pnColumn] ?? null,
+        reason: `duplicate part number "${result.partNumber}": replaced by line ${line}, later in the list`,
+        cells: [],
+      });
+      cellsToRead.push({ rejected: rejected.length - 1, line: earlierRow });
+      warnings.push({ row: line, field: "partNumber", message: `${result.partNumber}: duplicate part number; this later row replaces line ${earlierRow}` });
+    }
+    kept.push(result);
+    keptRows.push(line);
+    plausibility.add(result, line);
+    keptExtra.push(extra);
+  }
+  return state;
+}
+
 /**
  * Imports one vendor part list (CSV, TSV, semicolon or pipe separated) into engine Parts in SI.
  * Never throws: every data row ends as a part or a rejected row with its line, field and reason
@@ -147,59 +204,28 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
   const convert = makeRowConverter({ plans: map.plans, names: map.names, decimalComma, seriesSaturation: options.seriesSaturation });
   const pnColumn = map.plans.find((p) => p.quantity === "partNumber")?.column ?? -1;
   const extraColumns = map.mapping.filter((m) => m.status !== "mapped" || m.quantity === "shielding").map((m) => m.column);
-  const columnCount = map.names.length;
 
-  const kept: (Part | null)[] = [];
-  const keptRows: number[] = [];
-  const keptExtra: (Record<string, string> | null)[] = [];
-  // A replaced duplicate's cells are read again from the text at the end rather than every row's
-  // cells being held until then (100 000 rows of them in memory, for the few that need them).
-  const cellsToRead: { rejected: number; line: number }[] = [];
-  const seen = new KeyIndex();
-  const rejected: RejectedRow[] = [];
-  let dataRows = 0;
-  const problems = readRecords(input, delimiter, ({ rows, start, lines }) => {
-    for (let i = 0; i < rows.length; i++) {
-      const index = start + i;
-      if (index <= header || index === unitRow) continue;
-      const cells = rows[i] as string[];
-      if (isBlank(cells)) continue;
-      dataRows++;
-      const line = lines[i] as number;
-      const result = convert(cells, line, warnings);
-      if (!("partNumber" in result)) {
-        rejected.push({ row: line, field: result.field, header: result.header, reason: result.reason, cells });
-        continue;
+  // Rows become parts as they are read. The text is split in place (scanRecords); a quote
+  // papaparse would have to recover from sends the whole text through papaparse instead, so its
+  // recovery and problem reports apply, with everything collected so far thrown away.
+  const cells = new RecordCells();
+  let collected = collectRows(map.names, pnColumn, extraColumns);
+  const take = (index: number) => {
+    if (index > header && index !== unitRow && !cells.isBlank()) collected.add(cells, convert);
+  };
+  const problems: RecordProblem[] = [];
+  if (!scanRecords(input, delimiter, preview.linebreak, cells, take)) {
+    collected = collectRows(map.names, pnColumn, extraColumns);
+    const read = readRecords(input, delimiter, ({ rows, start, lines }) => {
+      for (let i = 0; i < rows.length; i++) {
+        cells.setCells(rows[i] as string[], lines[i] as number);
+        take(start + i);
       }
-      let extra: Record<string, string> | null = null;
-      for (const c of extraColumns) {
-        const cell = cells[c];
-        if (cell !== undefined && cell.trim() !== "") (extra ??= Object.create(null) as Record<string, string>)[map.names[c] as string] = cell;
-      }
-      for (let c = columnCount; c < cells.length; c++) {
-        const cell = cells[c] as string;
-        if (cell.trim() !== "") (extra ??= Object.create(null) as Record<string, string>)[`column ${c + 1}`] = cell;
-      }
-      const earlier = seen.get(result.partNumber);
-      if (earlier !== undefined) {
-        const earlierRow = keptRows[earlier] as number;
-        kept[earlier] = null;
-        rejected.push({
-          row: earlierRow,
-          field: "partNumber",
-          header: map.names[pnColumn] ?? null,
-          reason: `duplicate part number "${result.partNumber}": replaced by line ${line}, later in the list`,
-          cells: [],
-        });
-        cellsToRead.push({ rejected: rejected.length - 1, line: earlierRow });
-        warnings.push({ row: line, field: "partNumber", message: `${result.partNumber}: duplicate part number; this later row replaces line ${earlierRow}` });
-      }
-      seen.set(result.partNumber, kept.length);
-      kept.push(result);
-      keptRows.push(line);
-      keptExtra.push(extra);
-    }
-  }, preview.linebreak);
+    }, preview.linebreak);
+    problems.push(...read);
+  }
+  const { kept, keptRows, keptExtra, rejected, cellsToRead, dataRows, plausibility } = collected;
+  warnings.push(...collected.warnings);
   const reread = recordsAtLines(input, delimiter, cellsToRead.map((c) => c.line), preview.linebreak);
   for (const c of cellsToRead) (rejected[c.rejected] as RejectedRow).cells = reread.get(c.line) ?? [];
   for (const p of problems) warnings.push({ row: p.line, field: null, message: p.message });
@@ -214,7 +240,7 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
     const e = keptExtra[i];
     if (e !== null && e !== undefined) extra[p.partNumber] = e;
   });
-  warnings.push(...checkPlausibility(parts, partRows));
+  warnings.push(...plausibility.warnings(parts, partRows));
   rejected.sort((a, b) => a.row - b.row);
   // File-level warnings (row null) first, then by line; the sort is stable within a line.
   warnings.sort((a, b) => (a.row ?? 0) - (b.row ?? 0));

@@ -1,104 +1,15 @@
-import { completePart, saturationFromMaterial, type PartInput } from "../engine/partDefaults.ts";
+import { PART_FIELD_SLOT, PART_NUMBER_FIELDS, partFromFields, saturationFromMaterial, type PartTexts } from "../engine/partDefaults.ts";
 import type { Part, SaturationCharacter } from "../engine/types.ts";
 import type { ColumnPlan } from "./mapColumns.ts";
 import { parseDimensionsCell } from "./parseDimensionsCell.ts";
 import { parseNumberCell, type CellContext } from "./parseNumberCell.ts";
-import { plainDecimalToSi } from "./parseUnit.ts";
+import type { RecordCells } from "./RecordCells.ts";
 import { QUANTITIES, type QuantitySpec } from "./quantities.ts";
 import type { Quantity, RowWarning, Unit } from "./types.ts";
 
-/**
- * The converter's one working object: every PartInput field, undefined where not given. It is
- * reused for every row (completePart copies out of it and reads undefined as "not given"), so a
- * 100 000-row list allocates the parts and nothing per row besides.
- */
-type Scratch = { [K in keyof PartInput]-?: PartInput[K] | undefined };
+/** Where each numeric quantity goes in the row's field table (the Part field of the same name). */
+const FIELD_SLOT: Partial<Record<Quantity, number>> = PART_FIELD_SLOT;
 
-function reset(s: Scratch, partNumber: string): void {
-  s.partNumber = partNumber;
-  s.inductance = NaN;
-  s.maker = null;
-  s.series = null;
-  s.material = null;
-  s.tolerance = null;
-  s.dcrTyp = null;
-  s.dcrMax = null;
-  s.dcrTemp = undefined;
-  s.isat = null;
-  s.isatDrop = undefined;
-  s.isatHot = null;
-  s.isatHotTemp = null;
-  s.irms = null;
-  s.irmsRise = undefined;
-  s.srf = null;
-  s.length = null;
-  s.width = null;
-  s.height = null;
-  s.price = null;
-  s.saturation = undefined;
-  s.rollOffExponent = undefined;
-  s.acFactor = undefined;
-  s.coreLoss = null;
-}
-
-/** Stores an SI value on its Part field; direct property stores keep the object's shape. */
-function assign(input: Scratch, quantity: Quantity, v: number): void {
-  switch (quantity) {
-    case "inductance":
-      input.inductance = v;
-      break;
-    case "tolerance":
-      input.tolerance = v;
-      break;
-    case "dcrTyp":
-      input.dcrTyp = v;
-      break;
-    case "dcrMax":
-      input.dcrMax = v;
-      break;
-    case "isat":
-      input.isat = v;
-      break;
-    case "isatDrop":
-      input.isatDrop = v;
-      break;
-    case "isatHot":
-      input.isatHot = v;
-      break;
-    case "isatHotTemp":
-      input.isatHotTemp = v;
-      break;
-    case "irms":
-      input.irms = v;
-      break;
-    case "irmsRise":
-      input.irmsRise = v;
-      break;
-    case "srf":
-      input.srf = v;
-      break;
-    case "length":
-      input.length = v;
-      break;
-    case "width":
-      input.width = v;
-      break;
-    case "height":
-      input.height = v;
-      break;
-    case "price":
-      input.price = v;
-      break;
-    case "rollOffExponent":
-      input.rollOffExponent = v;
-      break;
-    case "acFactor":
-      input.acFactor = v;
-      break;
-    default:
-      break;
-  }
-}
 const CORE_LOSS: Quantity[] = ["coreK", "coreAlpha", "coreBeta", "bPerAmp", "coreVolume"];
 
 export interface RowRejection {
@@ -123,6 +34,16 @@ interface NumberColumn {
   header: string;
   /** Index into the row's core-loss figures (k, α, β, B per A, volume), -1 for other quantities. */
   core: number;
+  /** Index into the row's field table, -1 for core-loss figures. */
+  slot: number;
+}
+
+/** A text column with the last cell read from it: lists repeat a maker or series row after row. */
+interface TextColumn {
+  column: number;
+  quantity: "maker" | "series" | "material";
+  lastRaw: string;
+  lastTrimmed: string;
 }
 
 function contextFor(plan: ColumnPlan, decimalComma: boolean): CellContext {
@@ -144,17 +65,19 @@ function impossible(spec: QuantitySpec, quantity: Quantity, v: number): string |
 }
 
 /**
- * Builds the function that turns one data row into an engine Part (through completePart, so the
+ * Builds the function that turns one data row into an engine Part (through partFromFields, so the
  * stated defaults are filled) or the reason it cannot be one. Built once per list: the per-row
  * work is a loop over precomputed columns, with plain decimal cells read without the full parser.
  */
-export function makeRowConverter(setup: ConverterSetup): (cells: string[], line: number, warnings: RowWarning[]) => Part | RowRejection {
+export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, warnings: RowWarning[]) => Part | RowRejection {
   const { plans, names, decimalComma } = setup;
   const byQuantity = new Map<Quantity, ColumnPlan>();
   for (const p of plans) byQuantity.set(p.quantity, p);
   const pnPlan = byQuantity.get("partNumber");
   const lPlan = byQuantity.get("inductance");
-  const texts = plans.filter((p) => QUANTITIES[p.quantity].dimension === "text" && p.quantity !== "partNumber" && p.quantity !== "shielding");
+  const texts: TextColumn[] = plans
+    .filter((p) => p.quantity === "maker" || p.quantity === "series" || p.quantity === "material")
+    .map((p) => ({ column: p.column, quantity: p.quantity as TextColumn["quantity"], lastRaw: "", lastTrimmed: "" }));
   const numbers: NumberColumn[] = plans
     .filter((p) => QUANTITIES[p.quantity].dimension !== "text" && p.quantity !== "dimensions")
     .map((p) => ({
@@ -165,6 +88,7 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
       unit: p.unit,
       header: names[p.column] as string,
       core: CORE_LOSS.indexOf(p.quantity),
+      slot: FIELD_SLOT[p.quantity] ?? -1,
     }));
   const dimsPlan = byQuantity.get("dimensions");
   const dimsCtx = dimsPlan === undefined ? null : contextFor(dimsPlan, decimalComma);
@@ -175,8 +99,8 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
   const seriesSaturation = new Map<string, "soft" | "hard">();
   for (const [series, character] of Object.entries(setup.seriesSaturation ?? {})) seriesSaturation.set(series.trim().toLowerCase(), character);
   const headerOf = (plan: ColumnPlan) => names[plan.column] ?? null;
-  const scratch = {} as Scratch;
-  reset(scratch, "");
+  const fields = new Float64Array(PART_NUMBER_FIELDS.length);
+  const inductanceSlot = PART_FIELD_SLOT.inductance;
   const materialSaturation = new Map<string, SaturationCharacter | null>();
   // Shared by all rows (rows are converted one at a time): no closure is made per row.
   const state: { error: RowRejection | null; others: string[] | null } = { error: null, others: null };
@@ -185,43 +109,45 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
     else (state.others ??= []).push(field);
   };
 
-  return (cells, line, warnings) => {
+  return (cells, warnings) => {
+    const line = cells.line;
     if (pnPlan === undefined) {
       return { field: "partNumber", header: null, reason: 'missing part number: no part number column recognised (map one with "Header=partNumber")' };
     }
-    const partNumber = (cells[pnPlan.column] ?? "").trim();
+    const partNumber = cells.cell(pnPlan.column).trim();
     if (partNumber === "") return { field: "partNumber", header: headerOf(pnPlan), reason: "missing part number" };
     if (lPlan === undefined) {
       return { field: "inductance", header: null, reason: 'missing inductance: no inductance column recognised (map one with "Header=inductance:uH")' };
     }
-    const input = scratch;
-    reset(input, partNumber);
+    fields.fill(NaN);
+    const input: PartTexts = { partNumber, maker: null, series: null, material: null, saturation: null, coreLoss: null };
     let notes: RowWarning[] | null = null;
     const core: (number | undefined)[] | null = hasCore ? [undefined, undefined, undefined, undefined, undefined] : null;
     state.error = null;
     state.others = null;
 
     if (dimsPlan !== undefined && dimsCtx !== null) {
-      const raw = cells[dimsPlan.column] ?? "";
+      const raw = cells.cell(dimsPlan.column);
       const res = parseDimensionsCell(raw, dimsCtx);
       if (res.kind === "error") fail("dimensions", headerOf(dimsPlan), `unparseable dimensions: ${res.reason}`);
       else if (res.kind === "value") {
         if (res.length <= 0 || res.width <= 0 || (res.height !== null && res.height <= 0)) {
           fail("dimensions", headerOf(dimsPlan), `dimensions "${raw}" include a zero or negative size, which is impossible`);
         } else {
-          input.length = res.length;
-          input.width = res.width;
-          if (res.height !== null) input.height = res.height;
+          fields[PART_FIELD_SLOT.length] = res.length;
+          fields[PART_FIELD_SLOT.width] = res.width;
+          if (res.height !== null) fields[PART_FIELD_SLOT.height] = res.height;
         }
       }
     }
     for (let k = 0; k < numbers.length; k++) {
       const col = numbers[k] as NumberColumn;
-      const raw = cells[col.column];
-      if (raw === undefined || raw === "") continue;
-      // Plain decimals (nearly every cell) are read in one scan; the full parser takes the rest.
-      let v = plainDecimalToSi(raw, col.unit, decimalComma);
+      if (cells.cellLength(col.column) === 0) continue;
+      // Plain decimals (nearly every cell) are read in place in one scan; the full parser takes the rest.
+      let v = cells.plainNumber(col.column, col.unit, decimalComma);
+      let raw: string | null = null;
       if (Number.isNaN(v)) {
+        raw = cells.cell(col.column);
         const res = parseNumberCell(raw, col.ctx);
         if (res.kind === "missing") continue;
         if (res.kind === "error") {
@@ -233,28 +159,32 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
       }
       const bad = col.spec.valid === "positive" && v > 0 ? null : impossible(col.spec, col.quantity, v);
       if (bad !== null) {
-        fail(col.quantity, col.header, `${col.spec.label} "${raw}" is ${bad}, which is impossible`);
+        fail(col.quantity, col.header, `${col.spec.label} "${raw ?? cells.cell(col.column)}" is ${bad}, which is impossible`);
         continue;
       }
-      if (col.core >= 0) {
-        if (core !== null) core[col.core] = v;
-      } else assign(input, col.quantity, v);
+      if (col.slot >= 0) fields[col.slot] = v;
+      else if (core !== null && col.core >= 0) core[col.core] = v;
     }
     const e = state.error as RowRejection | null;
     const more = state.others as string[] | null;
     if (e !== null) return more === null ? e : { ...e, reason: `${e.reason}; also ${more.join(", ")}` };
-    if (Number.isNaN(input.inductance)) return { field: "inductance", header: headerOf(lPlan), reason: "missing inductance" };
+    if (Number.isNaN(fields[inductanceSlot])) return { field: "inductance", header: headerOf(lPlan), reason: "missing inductance" };
 
-    for (const plan of texts) {
-      const t = (cells[plan.column] ?? "").trim();
+    for (const col of texts) {
+      let t = col.lastTrimmed;
+      if (!cells.cellIs(col.column, col.lastRaw)) {
+        col.lastRaw = cells.cell(col.column);
+        col.lastTrimmed = t = col.lastRaw.trim();
+      }
       if (t === "") continue;
-      if (plan.quantity === "maker") input.maker = t;
-      else if (plan.quantity === "series") input.series = t;
-      else if (plan.quantity === "material") input.material = t;
+      if (col.quantity === "maker") input.maker = t;
+      else if (col.quantity === "series") input.series = t;
+      else input.material = t;
     }
-    if (input.isatDrop === undefined && headerDrop !== null && headerDrop > 0 && headerDrop < 1) input.isatDrop = headerDrop;
-    if (input.irmsRise === undefined && headerRise !== null && headerRise > 0) input.irmsRise = headerRise;
-    if (input.isatHotTemp === null && headerHotTemp !== null && input.isatHot !== null) input.isatHotTemp = headerHotTemp;
+    const S = PART_FIELD_SLOT;
+    if (Number.isNaN(fields[S.isatDrop]) && headerDrop !== null && headerDrop > 0 && headerDrop < 1) fields[S.isatDrop] = headerDrop;
+    if (Number.isNaN(fields[S.irmsRise]) && headerRise !== null && headerRise > 0) fields[S.irmsRise] = headerRise;
+    if (Number.isNaN(fields[S.isatHotTemp]) && headerHotTemp !== null && !Number.isNaN(fields[S.isatHot])) fields[S.isatHotTemp] = headerHotTemp;
     if (core !== null) {
       const [k, alpha, beta, bPerAmp, volume] = core;
       if (k !== undefined && alpha !== undefined && beta !== undefined && bPerAmp !== undefined) {
@@ -270,7 +200,7 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
       const character = seriesSaturation.get(input.series.toLowerCase());
       if (character !== undefined) input.saturation = character;
     }
-    if (input.saturation === undefined && typeof input.material === "string") {
+    if (input.saturation === null && typeof input.material === "string") {
       // Same answer completePart would give, looked up once per distinct material text.
       let character = materialSaturation.get(input.material);
       if (character === undefined) {
@@ -280,6 +210,6 @@ export function makeRowConverter(setup: ConverterSetup): (cells: string[], line:
       if (character !== null) input.saturation = character;
     }
     if (notes !== null) for (const n of notes) warnings.push(n);
-    return completePart(input as PartInput);
+    return partFromFields(input, fields);
   };
 }

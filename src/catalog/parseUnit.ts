@@ -123,18 +123,23 @@ const SI: Unit = { dimension: "number", factor: 1, exponent: 0, offset: 0, symbo
  * IEEE operation rounds correctly (Clinger's fast path). Longer texts return NaN.
  */
 export function plainDecimalToSi(text: string, unit: Unit | null, decimalComma = false): number {
+  return plainDecimalInRange(text, 0, text.length, unit, decimalComma);
+}
+
+/** plainDecimalToSi of text.slice(start, end), read in place without the slice. */
+export function plainDecimalInRange(text: string, start: number, end: number, unit: Unit | null, decimalComma: boolean): number {
   const u = unit ?? SI;
-  const length = text.length;
-  if (length === 0 || length > 15) return NaN;
+  const length = end - start;
+  if (length <= 0 || length > 15) return NaN;
   const pointChar = decimalComma ? 44 : 46;
-  let i = text.charCodeAt(0) === 45 ? 1 : 0;
-  const negative = i === 1;
-  if (i === length) return NaN;
+  let i = text.charCodeAt(start) === 45 ? start + 1 : start;
+  const negative = i !== start;
+  if (i === end) return NaN;
   let mantissa = 0;
   let decimals = 0;
   let point = false;
   let digits = 0;
-  for (; i < length; i++) {
+  for (; i < end; i++) {
     const c = text.charCodeAt(i);
     if (c >= 48 && c <= 57) {
       mantissa = mantissa * 10 + (c - 48);

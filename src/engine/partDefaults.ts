@@ -1,4 +1,4 @@
-import type { Part, SaturationCharacter } from "./types.ts";
+import type { CoreLossData, Part, SaturationCharacter } from "./types.ts";
 
 /**
  * Defaults for what part lists often leave out. Each one leans to the conservative side
@@ -42,35 +42,90 @@ const MATERIAL_CACHE_LIMIT = 1024;
 
 export type PartInput = Pick<Part, "partNumber" | "inductance"> & Partial<Omit<Part, "partNumber" | "inductance">>;
 
-/** Fills every optional field of a part with its stated default. */
-export function completePart(input: PartInput): Part {
-  const material = input.material ?? null;
-  const saturation = input.saturation ?? saturationFromMaterial(material) ?? PART_DEFAULTS.saturation;
-  const isatHot = input.isatHot ?? null;
+/** The numeric fields of a Part, in the order of a field table (see partFromFields). */
+export const PART_NUMBER_FIELDS = [
+  "inductance",
+  "tolerance",
+  "dcrTyp",
+  "dcrMax",
+  "dcrTemp",
+  "isat",
+  "isatDrop",
+  "isatHot",
+  "isatHotTemp",
+  "irms",
+  "irmsRise",
+  "srf",
+  "length",
+  "width",
+  "height",
+  "price",
+  "rollOffExponent",
+  "acFactor",
+] as const satisfies readonly (keyof Part)[];
+export type PartNumberField = (typeof PART_NUMBER_FIELDS)[number];
+/** Index of each numeric field in a field table. */
+export const PART_FIELD_SLOT = Object.fromEntries(PART_NUMBER_FIELDS.map((f, i) => [f, i])) as Record<PartNumberField, number>;
+const S = PART_FIELD_SLOT;
+
+/** The fields of a Part that are not numbers; null or undefined where not given. */
+export interface PartTexts {
+  partNumber: string;
+  maker?: string | null;
+  series?: string | null;
+  material?: string | null;
+  saturation?: SaturationCharacter | null;
+  coreLoss?: CoreLossData | null;
+}
+
+function known(v: number): number | null {
+  return Number.isNaN(v) ? null : v;
+}
+
+function given(v: number, fallback: number): number {
+  return Number.isNaN(v) ? fallback : v;
+}
+
+/**
+ * Fills every optional field of a part with its stated default, from its texts and a table of its
+ * numbers (PART_NUMBER_FIELDS order, NaN where not given). The importer's form: a reused
+ * Float64Array holds a row's numbers unboxed, where a reused object would box every one.
+ */
+export function partFromFields(texts: PartTexts, fields: Float64Array): Part {
+  const material = texts.material ?? null;
+  const saturation = texts.saturation ?? saturationFromMaterial(material) ?? PART_DEFAULTS.saturation;
+  const isatHot = known(fields[S.isatHot] as number);
   return {
-    partNumber: input.partNumber,
-    maker: input.maker ?? null,
-    series: input.series ?? null,
+    partNumber: texts.partNumber,
+    maker: texts.maker ?? null,
+    series: texts.series ?? null,
     material,
-    inductance: input.inductance,
-    tolerance: input.tolerance ?? null,
-    dcrTyp: input.dcrTyp ?? null,
-    dcrMax: input.dcrMax ?? null,
-    dcrTemp: input.dcrTemp ?? PART_DEFAULTS.dcrTemp,
-    isat: input.isat ?? null,
-    isatDrop: input.isatDrop ?? PART_DEFAULTS.isatDrop,
+    inductance: fields[S.inductance] as number,
+    tolerance: known(fields[S.tolerance] as number),
+    dcrTyp: known(fields[S.dcrTyp] as number),
+    dcrMax: known(fields[S.dcrMax] as number),
+    dcrTemp: given(fields[S.dcrTemp] as number, PART_DEFAULTS.dcrTemp),
+    isat: known(fields[S.isat] as number),
+    isatDrop: given(fields[S.isatDrop] as number, PART_DEFAULTS.isatDrop),
     isatHot,
-    isatHotTemp: input.isatHotTemp ?? (isatHot === null ? null : PART_DEFAULTS.isatHotTemp),
-    irms: input.irms ?? null,
-    irmsRise: input.irmsRise ?? PART_DEFAULTS.irmsRise,
-    srf: input.srf ?? null,
-    length: input.length ?? null,
-    width: input.width ?? null,
-    height: input.height ?? null,
-    price: input.price ?? null,
+    isatHotTemp: isatHot === null ? known(fields[S.isatHotTemp] as number) : given(fields[S.isatHotTemp] as number, PART_DEFAULTS.isatHotTemp),
+    irms: known(fields[S.irms] as number),
+    irmsRise: given(fields[S.irmsRise] as number, PART_DEFAULTS.irmsRise),
+    srf: known(fields[S.srf] as number),
+    length: known(fields[S.length] as number),
+    width: known(fields[S.width] as number),
+    height: known(fields[S.height] as number),
+    price: known(fields[S.price] as number),
     saturation,
-    rollOffExponent: input.rollOffExponent ?? ROLL_OFF_EXPONENT[saturation],
-    acFactor: input.acFactor ?? PART_DEFAULTS.acFactor,
-    coreLoss: input.coreLoss ?? null,
+    rollOffExponent: given(fields[S.rollOffExponent] as number, ROLL_OFF_EXPONENT[saturation]),
+    acFactor: given(fields[S.acFactor] as number, PART_DEFAULTS.acFactor),
+    coreLoss: texts.coreLoss ?? null,
   };
+}
+
+/** Fills every optional field of a part with its stated default (null or absent: not given). */
+export function completePart(input: PartInput): Part {
+  const fields = new Float64Array(PART_NUMBER_FIELDS.length);
+  for (let k = 0; k < PART_NUMBER_FIELDS.length; k++) fields[k] = input[PART_NUMBER_FIELDS[k] as PartNumberField] ?? NaN;
+  return partFromFields(input, fields);
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkPlausibility } from "../../src/catalog/checkPlausibility.ts";
+import { checkPlausibility, PlausibilityCheck } from "../../src/catalog/checkPlausibility.ts";
 import { completePart, type PartInput } from "../../src/engine/partDefaults.ts";
 import { si } from "./siReference.ts";
 
@@ -23,5 +23,21 @@ describe("checkPlausibility", () => {
   it("checkPlausibility of ordinary parts says nothing", () => {
     expect(checkPlausibility([part("A", 4.7, { dcrMax: 0.045, isat: 3.2, srf: 40e6 }), part("B", 10)], [2, 3])).toEqual([]);
     expect(checkPlausibility([], [])).toEqual([]);
+  });
+
+  it("checkPlausibility over 10 000 parts still finds the one a thousand times off the median (the sample thins evenly)", () => {
+    const parts = Array.from({ length: 10_000 }, (_, i) => part(`P${i}`, i % 2 === 0 ? 10 : 22, { isat: 2 + (i % 7) }));
+    parts[6543] = part("X", 10, { isat: 0.002 });
+    const w = checkPlausibility(parts, parts.map((_, i) => i + 2));
+    expect(w).toEqual([expect.objectContaining({ row: 6545, field: "isat", message: expect.stringMatching(/far from the list's median of 5 A/) })]);
+  });
+
+  it("PlausibilityCheck reports no contradiction for a part added and later replaced", () => {
+    const check = new PlausibilityCheck();
+    const replaced = part("A", 4.7, { dcrTyp: 0.05, dcrMax: 0.04 });
+    const kept = part("A", 4.7, { dcrTyp: 0.04, dcrMax: 0.05 });
+    check.add(replaced, 2);
+    check.add(kept, 3);
+    expect(check.warnings([kept], [3])).toEqual([]);
   });
 });
