@@ -28,48 +28,92 @@ export interface CornerLosses {
  * every worst case.
  */
 export class CornerAccumulator {
-  corners = 0;
-  firstUnreachable = -1;
-  ipk = -Infinity;
-  ipkAt = -1;
-  ivalley = Infinity;
-  ivalleyAt = -1;
-  irms = -Infinity;
-  irmsAt = -1;
-  ripple = -Infinity;
-  rippleAt = -1;
-  totalLoss = -Infinity;
-  totalLossAt = -1;
-  dcrLoss = -Infinity;
-  dcrLossAt = -1;
-  coreLoss = -Infinity;
-  coreLossAt = -1;
-  tempRise = -Infinity;
-  tempRiseAt = -1;
-  peak = -Infinity;
-  peakAt = -1;
+  // Declared here and set by reset(): a fresh accumulator and a reused one have one shape, and no
+  // field starts out undefined (which would make V8 box every number later stored in it).
+  declare corners: number;
+  declare firstUnreachable: number;
+  declare ipk: number;
+  declare ipkAt: number;
+  declare ivalley: number;
+  declare ivalleyAt: number;
+  declare irms: number;
+  declare irmsAt: number;
+  declare ripple: number;
+  declare rippleAt: number;
+  declare totalLoss: number;
+  declare totalLossAt: number;
+  declare dcrLoss: number;
+  declare dcrLossAt: number;
+  declare coreLoss: number;
+  declare coreLossAt: number;
+  declare tempRise: number;
+  declare tempRiseAt: number;
+  declare peak: number;
+  declare peakAt: number;
   /** Smallest Isat(T)/|i|max − 1 over corners (−1 for a corner past the curve). */
-  saturationMargin = Infinity;
-  saturationAt = -1;
-  saturationPeak = 0;
-  saturationIsat: number | null = null;
-  saturationTemperature = 0;
-  saturationBeyond = false;
+  declare saturationMargin: number;
+  declare saturationAt: number;
+  declare saturationPeak: number;
+  declare saturationIsat: number | null;
+  declare saturationTemperature: number;
+  declare saturationBeyond: boolean;
   /** Ripple ratio over the corners at nominal input and full load. */
-  windowCorners = 0;
-  windowMin = Infinity;
-  windowMax = -Infinity;
-  windowFirst = -1;
-  windowOutsideAt = -1;
-  windowOutsideRatio = 0;
+  declare windowCorners: number;
+  declare windowMin: number;
+  declare windowMax: number;
+  declare windowFirst: number;
+  declare windowOutsideAt: number;
+  declare windowOutsideRatio: number;
   /** First corner at minimum load that is not in CCM. */
-  lightLoadAt = -1;
-  lightLoadMode: Mode = "ccm";
+  declare lightLoadAt: number;
+  declare lightLoadMode: Mode;
 
   constructor(
-    private readonly spec: Spec,
-    private readonly isat: number | null,
-  ) {}
+    private spec: Spec,
+    private isat: number | null,
+  ) {
+    this.reset(isat, spec);
+  }
+
+  /** Starts over for another part (ranking a list reuses one accumulator rather than making one per part). */
+  reset(isat: number | null, spec: Spec): void {
+    this.spec = spec;
+    this.isat = isat;
+    this.corners = 0;
+    this.firstUnreachable = -1;
+    this.ipk = -Infinity;
+    this.ipkAt = -1;
+    this.ivalley = Infinity;
+    this.ivalleyAt = -1;
+    this.irms = -Infinity;
+    this.irmsAt = -1;
+    this.ripple = -Infinity;
+    this.rippleAt = -1;
+    this.totalLoss = -Infinity;
+    this.totalLossAt = -1;
+    this.dcrLoss = -Infinity;
+    this.dcrLossAt = -1;
+    this.coreLoss = -Infinity;
+    this.coreLossAt = -1;
+    this.tempRise = -Infinity;
+    this.tempRiseAt = -1;
+    this.peak = -Infinity;
+    this.peakAt = -1;
+    this.saturationMargin = Infinity;
+    this.saturationAt = -1;
+    this.saturationPeak = 0;
+    this.saturationIsat = null;
+    this.saturationTemperature = 0;
+    this.saturationBeyond = false;
+    this.windowCorners = 0;
+    this.windowMin = Infinity;
+    this.windowMax = -Infinity;
+    this.windowFirst = -1;
+    this.windowOutsideAt = -1;
+    this.windowOutsideRatio = 0;
+    this.lightLoadAt = -1;
+    this.lightLoadMode = "ccm";
+  }
 
   add(wave: CornerWave, losses: CornerLosses, vin: number, iout: number, index: number): void {
     this.corners++;

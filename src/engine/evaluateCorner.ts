@@ -109,7 +109,10 @@ export class CornerSolver {
   private readonly guessIout = [NaN, NaN];
   private readonly guessTemperature = [0, 0];
 
-  constructor(private readonly spec: Spec) {
+  private spec: Spec;
+
+  constructor(spec: Spec) {
+    this.spec = spec;
     this.curve = this.constantCurve;
     this.op = {
       topology: spec.topology,
@@ -135,6 +138,24 @@ export class CornerSolver {
       exponent: spec.thermalExponent,
       start: spec.ambient,
     };
+  }
+
+  /** Re-aims the solver at another spec, keeping its objects (see PartScreener.aim). */
+  setSpec(spec: Spec): void {
+    if (spec === this.spec) return;
+    this.spec = spec;
+    const { op, balance } = this;
+    op.topology = spec.topology;
+    op.rectifier = spec.rectifier;
+    op.vout = spec.vout;
+    op.fsw = spec.fsw;
+    op.drops.switchResistance = spec.switchResistance;
+    op.drops.switchDrop = spec.switchDrop;
+    op.drops.rectifierDrop = spec.rectifierDrop;
+    op.drops.rectifierResistance = spec.rectifierResistance;
+    balance.ambient = spec.ambient;
+    balance.exponent = spec.thermalExponent;
+    this.startPart();
   }
 
   private setCurve(prepared: PreparedPart, inductance: number, isat: number | null): void {

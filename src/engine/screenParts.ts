@@ -81,50 +81,91 @@ function cornerGrid(spec: Spec): { vins: number[]; loads: number[] } {
 }
 
 /**
- * One part at every corner (the order of cornerPoints), judged without reasons. The single loop
- * behind screenFigures and the browser's ranking worker, so both give evaluatePart's numbers.
+ * Judges parts one at a time at every corner (the order of cornerPoints), without reasons: the
+ * single loop behind screenFigures and the browser's ranking worker, so both give evaluatePart's
+ * numbers. It keeps one solver, accumulator and verdict for all parts, and screen() returns the
+ * same verdict object every time, to be read before the next call.
+ *
+ * Keep one screener per thread and aim() it at each new spec rather than making one per list or
+ * per step: V8 embeds the objects of a hot loop's screener in the optimised code, and when such
+ * a screener died every hot function was deoptimised at the next full collection (hundreds of
+ * "weak objects" deoptimisations a run, about half the speed).
  */
-export function screenPart(solver: CornerSolver, spec: Spec, part: Part): PartVerdict {
-  const prepared = preparePart(part);
-  const tolerance = effectiveTolerance(spec, part);
-  const acc = new CornerAccumulator(spec, part.isat);
-  const { vins, loads } = cornerGrid(spec);
-  solver.startPart();
-  let index = 0;
-  let lightReachable = false;
-  for (const vin of vins) {
-    for (const iout of loads) {
-      for (let k = tolerance > 0 ? -1 : 0; k <= (tolerance > 0 ? 1 : 0); k++) {
-        solver.solve(prepared, vin, iout, part.inductance * (1 + k * tolerance));
-        if (iout === spec.iout.min && !solver.solution.unreachable) lightReachable = true;
-        acc.add(solver.solution, solver, vin, iout, index++);
+export class PartScreener {
+  private spec: Spec;
+  private readonly solver: CornerSolver;
+  private readonly acc: CornerAccumulator;
+  private readonly verdict: PartVerdict = {
+    status: "pass",
+    failures: 0,
+    peak: 0,
+    irms: 0,
+    totalLoss: 0,
+    tempRise: 0,
+    minMargin: 0,
+    saturationMargin: 0,
+    heatingMargin: 0,
+    unreachable: false,
+    lightLoadMode: null,
+  };
+
+  constructor(spec: Spec) {
+    this.spec = spec;
+    this.solver = new CornerSolver(spec);
+    this.acc = new CornerAccumulator(spec, null);
+  }
+
+  /** Judges the next parts against `spec`; cheap when it is the spec already aimed at. */
+  aim(spec: Spec): this {
+    if (spec !== this.spec) {
+      this.spec = spec;
+      this.solver.setSpec(spec);
+    }
+    return this;
+  }
+
+  screen(part: Part): PartVerdict {
+    const { spec, solver, acc, verdict } = this;
+    const prepared = preparePart(part);
+    const tolerance = effectiveTolerance(spec, part);
+    acc.reset(part.isat, spec);
+    const { vins, loads } = cornerGrid(spec);
+    solver.startPart();
+    let index = 0;
+    let lightReachable = false;
+    for (const vin of vins) {
+      for (const iout of loads) {
+        for (let k = tolerance > 0 ? -1 : 0; k <= (tolerance > 0 ? 1 : 0); k++) {
+          solver.solve(prepared, vin, iout, part.inductance * (1 + k * tolerance));
+          if (iout === spec.iout.min && !solver.solution.unreachable) lightReachable = true;
+          acc.add(solver.solution, solver, vin, iout, index++);
+        }
       }
     }
-  }
-  const checks = partChecks(spec, part, acc, null);
-  let failures = 0;
-  let saturationMargin = NaN;
-  let heatingMargin = NaN;
-  for (const c of checks) {
-    if (c.status === "fail") failures++;
-    if (c.status !== "unchecked" && c.margin !== null) {
-      if (c.name === "saturation") saturationMargin = c.margin;
-      else if (c.name === "heating") heatingMargin = c.margin;
+    const checks = partChecks(spec, part, acc, null);
+    let failures = 0;
+    let saturationMargin = NaN;
+    let heatingMargin = NaN;
+    for (const c of checks) {
+      if (c.status === "fail") failures++;
+      if (c.status !== "unchecked" && c.margin !== null) {
+        if (c.name === "saturation") saturationMargin = c.margin;
+        else if (c.name === "heating") heatingMargin = c.margin;
+      }
     }
+    verdict.status = statusOf(checks);
+    verdict.failures = failures;
+    verdict.peak = acc.peakAt < 0 ? NaN : acc.peak;
+    verdict.irms = acc.irmsAt < 0 ? NaN : acc.irms;
+    verdict.totalLoss = acc.totalLossAt < 0 ? NaN : acc.totalLoss;
+    verdict.tempRise = acc.tempRiseAt < 0 ? NaN : acc.tempRise;
+    verdict.minMargin = minimumMargin(checks) ?? NaN;
+    verdict.saturationMargin = saturationMargin;
+    verdict.heatingMargin = heatingMargin;
+    verdict.unreachable = acc.firstUnreachable >= 0;
+    verdict.lightLoadMode = !lightReachable ? null : acc.lightLoadAt < 0 ? "ccm" : acc.lightLoadMode;
+    return verdict;
   }
-  return {
-    status: statusOf(checks),
-    failures,
-    peak: acc.peakAt < 0 ? NaN : acc.peak,
-    irms: acc.irmsAt < 0 ? NaN : acc.irms,
-    totalLoss: acc.totalLossAt < 0 ? NaN : acc.totalLoss,
-    tempRise: acc.tempRiseAt < 0 ? NaN : acc.tempRise,
-    minMargin: minimumMargin(checks) ?? NaN,
-    saturationMargin,
-    heatingMargin,
-    unreachable: acc.firstUnreachable >= 0,
-    lightLoadMode: !lightReachable ? null : acc.lightLoadAt < 0 ? "ccm" : acc.lightLoadMode,
-  };
 }
 
 /**
@@ -133,29 +174,44 @@ export function screenPart(solver: CornerSolver, spec: Spec, part: Part): PartVe
  */
 export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to = parts.length, options: ScreenOptions = {}): PartFigures {
   const n = Math.max(0, Math.min(to, parts.length) - from);
-  const status: ResultStatus[] = new Array<ResultStatus>(n);
-  const failures = new Uint8Array(n);
-  const peak = new Float64Array(n);
-  const irms = new Float64Array(n);
-  const totalLoss = new Float64Array(n);
-  const tempRise = new Float64Array(n);
-  const minMargin = new Float64Array(n);
-  const unreachable = new Uint8Array(n);
-  const solver = new CornerSolver(spec);
+  const figures: PartFigures = {
+    status: new Array<ResultStatus>(n),
+    failures: new Uint8Array(n),
+    peak: new Float64Array(n),
+    irms: new Float64Array(n),
+    totalLoss: new Float64Array(n),
+    tempRise: new Float64Array(n),
+    minMargin: new Float64Array(n),
+    unreachable: new Uint8Array(n),
+  };
+  // One screener for the thread (see PartScreener); a call from within onProgress gets its own.
+  const screener = idleScreener?.aim(spec) ?? new PartScreener(spec);
+  idleScreener = null;
+  try {
+    fillFigures(screener, parts, from, figures, options);
+  } finally {
+    idleScreener = screener;
+  }
+  return figures;
+}
+
+let idleScreener: PartScreener | null = null;
+
+function fillFigures(screener: PartScreener, parts: readonly Part[], from: number, out: PartFigures, options: ScreenOptions): void {
+  const n = out.failures.length;
   const every = options.progressEvery ?? 1000;
   for (let p = 0; p < n; p++) {
-    const v = screenPart(solver, spec, parts[from + p]!);
-    status[p] = v.status;
-    failures[p] = v.failures;
-    peak[p] = v.peak;
-    irms[p] = v.irms;
-    totalLoss[p] = v.totalLoss;
-    tempRise[p] = v.tempRise;
-    minMargin[p] = v.minMargin;
-    unreachable[p] = v.unreachable ? 1 : 0;
+    const v = screener.screen(parts[from + p]!);
+    out.status[p] = v.status;
+    out.failures[p] = v.failures;
+    out.peak[p] = v.peak;
+    out.irms[p] = v.irms;
+    out.totalLoss[p] = v.totalLoss;
+    out.tempRise[p] = v.tempRise;
+    out.minMargin[p] = v.minMargin;
+    out.unreachable[p] = v.unreachable ? 1 : 0;
     if (options.onProgress !== undefined && (p + 1) % every === 0) options.onProgress(p + 1, n);
   }
-  return { status, failures, peak, irms, totalLoss, tempRise, minMargin, unreachable };
 }
 
 /** Joins slices computed in list order. */

@@ -1,5 +1,6 @@
 import type { Part } from "../engine/types.ts";
 import { mergeLists } from "../catalog/mergeLists.ts";
+import { PartScreener } from "../engine/screenParts.ts";
 import { emptySlice, screenInto, sliceBuffers } from "./screenSlice.ts";
 import { finishRanking, rankingBuffers } from "./finishRanking.ts";
 import type { RankReply, RankRequest } from "./protocol.ts";
@@ -33,6 +34,8 @@ export function createRankHandler(post: Post): (request: RankRequest) => void {
   let version = -1;
   /** Highest job seen: a job stops as soon as a newer one (or its cancel) arrives. */
   let latest = 0;
+  /** One for the worker's life, aimed at each step's spec (see PartScreener). */
+  let screener: PartScreener | null = null;
 
   async function screen(request: Extract<RankRequest, { type: "screen" }>): Promise<void> {
     const { job, from, to, spec } = request;
@@ -47,7 +50,7 @@ export function createRankHandler(post: Post): (request: RankRequest) => void {
       const started = performance.now();
       do {
         const end = Math.min(to, at + SCREEN_STEP);
-        screenInto(spec, parts, at, end, out);
+        screenInto((screener ??= new PartScreener(spec)).aim(spec), parts, at, end, out);
         at = end;
       } while (at < to && performance.now() - started < SCREEN_SLICE_MS);
       post({ type: "progress", job, done: at - from });

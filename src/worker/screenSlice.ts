@@ -1,10 +1,9 @@
 import type { Part, Spec } from "../engine/types.ts";
-import { CornerSolver } from "../engine/evaluateCorner.ts";
-import { screenPart } from "../engine/screenParts.ts";
+import { PartScreener } from "../engine/screenParts.ts";
 import { MODE_UNKNOWN, modeCode, statusCode } from "./codes.ts";
 
 /**
- * Figures of parts[from, to) in transferable typed arrays: the engine's screenPart verdict of
+ * Figures of parts[from, to) in transferable typed arrays: the engine's PartScreener verdict of
  * each part, with the string unions as codes (codes.ts).
  */
 export interface SliceFigures {
@@ -51,12 +50,12 @@ export function sliceBuffers(s: SliceFigures): ArrayBuffer[] {
 
 /**
  * Screens parts[from, to) into `out` at offset `from − out.from`, so that a worker can fill one
- * slice in several short steps and stay responsive to a newer request in between.
+ * slice in several short steps and stay responsive to a newer request in between. The screener
+ * is the caller's, aimed at the job's spec: one per worker (see PartScreener).
  */
-export function screenInto(spec: Spec, parts: readonly Part[], from: number, to: number, out: SliceFigures): void {
-  const solver = new CornerSolver(spec);
+export function screenInto(screener: PartScreener, parts: readonly Part[], from: number, to: number, out: SliceFigures): void {
   for (let i = from; i < to; i++) {
-    const v = screenPart(solver, spec, parts[i]!);
+    const v = screener.screen(parts[i]!);
     const p = i - out.from;
     out.status[p] = statusCode(v.status);
     out.failures[p] = v.failures;
@@ -75,6 +74,6 @@ export function screenInto(spec: Spec, parts: readonly Part[], from: number, to:
 /** Screens a whole slice in one go (tests, small lists). */
 export function screenSlice(spec: Spec, parts: readonly Part[], from = 0, to = parts.length): SliceFigures {
   const out = emptySlice(from, Math.max(0, to - from));
-  screenInto(spec, parts, from, to, out);
+  screenInto(new PartScreener(spec), parts, from, to, out);
   return out;
 }

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { importPartList } from "../../src/catalog/importPartList.ts";
 import { parseSpec } from "../../src/engine/parseSpec.ts";
-import { joinFigures, rankFigures, screenFigures, screenParts } from "../../src/engine/screenParts.ts";
+import { joinFigures, PartScreener, rankFigures, screenFigures, screenParts } from "../../src/engine/screenParts.ts";
+import { makeSpec } from "../../src/engine/specDefaults.ts";
 import { evaluatePart } from "../../src/engine/evaluatePart.ts";
 import { rankedResults, rankParts } from "../../src/engine/rankParts.ts";
 import type { Spec } from "../../src/engine/types.ts";
@@ -22,6 +23,19 @@ describe("screenParts", () => {
       expect(s.peak[i]).toBe(e.worst.peakMagnitude.value);
       expect(Number.isNaN(s.minMargin[i]!) ? null : s.minMargin[i]).toBe(e.minMargin);
     });
+  });
+
+  it("a PartScreener re-aimed at another spec judges as a fresh one for that spec does", () => {
+    const boost = makeSpec({ topology: "boost", vin: { min: 3, nom: 3.6, max: 4.2 }, vout: 5, iout: { min: 0.05, max: 1 }, fsw: 1e6, ambient: 60 });
+    const reused = new PartScreener(spec);
+    const sample = parts.slice(0, 40);
+    for (const p of sample) reused.screen(p);
+    reused.aim(boost);
+    const fresh = new PartScreener(boost);
+    for (const p of sample) expect({ ...reused.screen(p) }).toEqual({ ...fresh.screen(p) });
+    reused.aim(spec);
+    const first = new PartScreener(spec);
+    for (const p of sample) expect({ ...reused.screen(p) }).toEqual({ ...first.screen(p) });
   });
 
   it("screenFigures over slices joined gives the same ranking as one pass", () => {
