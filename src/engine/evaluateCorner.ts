@@ -34,17 +34,22 @@ export function lossDcr(part: Part): number | null {
   return part.dcrMax ?? part.dcrTyp;
 }
 
-export function preparePart(part: Part): PreparedPart {
+/** The per-part constants, into `out` when given (a ranking reuses one rather than making one per part). */
+export function preparePart(part: Part, out?: PreparedPart): PreparedPart {
   const dcrRef = lossDcr(part);
   const ratedPower = ratedHeatingPower(part);
-  return {
-    part,
-    dcr20: dcrRef === null ? null : copperResistance(dcrRef, part.dcrTemp, 20),
-    ratedPower,
-    inverseRatedPower: ratedPower === null ? 1 : 1 / ratedPower,
-    isatSlope: isatSlopePerKelvin(part),
-    kneePerIsat: part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent),
-  };
+  const dcr20 = dcrRef === null ? null : copperResistance(dcrRef, part.dcrTemp, 20);
+  const inverseRatedPower = ratedPower === null ? 1 : 1 / ratedPower;
+  const isatSlope = isatSlopePerKelvin(part);
+  const kneePerIsat = part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent);
+  if (out === undefined) return { part, dcr20, ratedPower, inverseRatedPower, isatSlope, kneePerIsat };
+  out.part = part;
+  out.dcr20 = dcr20;
+  out.ratedPower = ratedPower;
+  out.inverseRatedPower = inverseRatedPower;
+  out.isatSlope = isatSlope;
+  out.kneePerIsat = kneePerIsat;
+  return out;
 }
 
 /** Flux curve of a part at one inductance corner and temperature (constant L when Isat is unknown). */

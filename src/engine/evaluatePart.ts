@@ -16,9 +16,11 @@ export interface PartEvaluation {
 }
 
 /** Smallest current margin: saturation or heating headroom as a fraction, null when neither is known. */
-export function minimumMargin(checks: Check[]): number | null {
+/** Over the first `count` checks (all of them, or a CheckList's current ones). */
+export function minimumMargin(checks: readonly Check[], count = checks.length): number | null {
   let smallest: number | null = null;
-  for (const c of checks) {
+  for (let k = 0; k < count; k++) {
+    const c = checks[k]!;
     if ((c.name === "saturation" || c.name === "heating") && c.margin !== null && c.status !== "unchecked") {
       smallest = smallest === null ? c.margin : Math.min(smallest, c.margin);
     }
@@ -26,10 +28,11 @@ export function minimumMargin(checks: Check[]): number | null {
   return smallest;
 }
 
-/** pass only when every check ran and passed; incomplete when nothing failed but some could not run. */
-export function statusOf(checks: Check[]): ResultStatus {
+/** pass only when every check ran and passed; incomplete when nothing failed but some could not run (first `count` checks). */
+export function statusOf(checks: readonly Check[], count = checks.length): ResultStatus {
   let unchecked = false;
-  for (const c of checks) {
+  for (let k = 0; k < count; k++) {
+    const c = checks[k]!;
     if (c.status === "fail") return "fail";
     if (c.status === "unchecked") unchecked = true;
   }

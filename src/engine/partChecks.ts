@@ -6,8 +6,30 @@ import { assertNever } from "./assertNever.ts";
 /** Names a corner by its index; null skips the readable reasons (ranking a large list needs only the verdicts). */
 export type DescribeCorner = ((index: number) => string) | null;
 
-function verdict(name: CheckName, status: CheckStatus, margin: number | null = null, cornerIndex: number | null = null): Check {
-  return { name, status, reason: "", margin, cornerIndex };
+/**
+ * The checks of one part as they are judged. Reusable: clear() keeps the Check objects, so
+ * ranking a list makes them once rather than a dozen per part; `items[0, length)` are this part's.
+ */
+export class CheckList {
+  readonly items: Check[] = [];
+  length = 0;
+
+  clear(): void {
+    this.length = 0;
+  }
+
+  add(name: CheckName, status: CheckStatus, margin: number | null = null, cornerIndex: number | null = null): void {
+    const c = this.items[this.length];
+    if (c === undefined) this.items.push({ name, status, reason: "", margin, cornerIndex });
+    else {
+      c.name = name;
+      c.status = status;
+      c.reason = "";
+      c.margin = margin;
+      c.cornerIndex = cornerIndex;
+    }
+    this.length++;
+  }
 }
 
 function footprint(part: Part): number | null {
@@ -28,58 +50,67 @@ const LIMITS = [
  * Missing data gives "not checked (no data)" rather than a pass.
  */
 export function partChecks(spec: Spec, part: Part, acc: CornerAccumulator, describe: DescribeCorner): Check[] {
+  const list = new CheckList();
+  judgeChecks(spec, part, acc, list);
+  const checks = list.items;
+  if (describe !== null) for (const c of checks) c.reason = reasonFor(c, spec, part, acc, describe);
+  return checks;
+}
+
+/** The verdicts of partChecks, without reasons, into `checks` (cleared first). */
+export function judgeChecks(spec: Spec, part: Part, acc: CornerAccumulator, checks: CheckList): void {
   const t = spec.targets;
-  const checks: Check[] = [];
-  checks.push(acc.firstUnreachable >= 0 ? verdict("operatingPoint", "fail", null, acc.firstUnreachable) : verdict("operatingPoint", "pass"));
+  checks.clear();
+  if (acc.firstUnreachable >= 0) checks.add("operatingPoint", "fail", null, acc.firstUnreachable);
+  else checks.add("operatingPoint", "pass");
 
   // Saturation: Isat at the corner's temperature against the corner's largest |i|.
-  if (part.isat === null) checks.push(verdict("saturation", "unchecked"));
+  if (part.isat === null) checks.add("saturation", "unchecked");
   else if (acc.saturationAt >= 0) {
     const ok = !acc.saturationBeyond && acc.saturationMargin >= t.saturationMargin;
-    checks.push(verdict("saturation", ok ? "pass" : "fail", acc.saturationMargin, acc.saturationAt));
+    checks.add("saturation", ok ? "pass" : "fail", acc.saturationMargin, acc.saturationAt);
   }
 
-  if (part.irms === null) checks.push(verdict("heating", "unchecked"));
+  if (part.irms === null) checks.add("heating", "unchecked");
   else if (acc.irmsAt >= 0) {
     const margin = part.irms / acc.irms - 1;
-    checks.push(verdict("heating", margin >= t.heatingMargin ? "pass" : "fail", margin, acc.irmsAt));
+    checks.add("heating", margin >= t.heatingMargin ? "pass" : "fail", margin, acc.irmsAt);
   }
 
   if (acc.tempRiseAt < 0) {
-    checks.push(verdict("temperatureRise", "unchecked"));
-    if (t.maxTemperature !== null) checks.push(verdict("temperature", "unchecked"));
+    checks.add("temperatureRise", "unchecked");
+    if (t.maxTemperature !== null) checks.add("temperature", "unchecked");
   } else {
     const margin = (t.maxTempRise - acc.tempRise) / t.maxTempRise;
-    checks.push(verdict("temperatureRise", acc.tempRise <= t.maxTempRise ? "pass" : "fail", margin, acc.tempRiseAt));
+    checks.add("temperatureRise", acc.tempRise <= t.maxTempRise ? "pass" : "fail", margin, acc.tempRiseAt);
     if (t.maxTemperature !== null) {
-      checks.push(verdict("temperature", spec.ambient + acc.tempRise <= t.maxTemperature ? "pass" : "fail", null, acc.tempRiseAt));
+      checks.add("temperature", spec.ambient + acc.tempRise <= t.maxTemperature ? "pass" : "fail", null, acc.tempRiseAt);
     }
   }
 
   // Ripple window at nominal input and full load, across the tolerance corners.
   if (acc.windowCorners > 0) {
-    checks.push(acc.windowOutsideAt < 0 ? verdict("rippleRatio", "pass", null, acc.windowFirst) : verdict("rippleRatio", "fail", null, acc.windowOutsideAt));
+    if (acc.windowOutsideAt < 0) checks.add("rippleRatio", "pass", null, acc.windowFirst);
+    else checks.add("rippleRatio", "fail", null, acc.windowOutsideAt);
   }
 
   if (t.lightLoadMode === "ccm") {
-    checks.push(acc.lightLoadAt < 0 ? verdict("lightLoadMode", "pass") : verdict("lightLoadMode", "fail", null, acc.lightLoadAt));
+    if (acc.lightLoadAt < 0) checks.add("lightLoadMode", "pass");
+    else checks.add("lightLoadMode", "fail", null, acc.lightLoadAt);
   }
 
-  if (part.srf === null) checks.push(verdict("srf", "unchecked"));
+  if (part.srf === null) checks.add("srf", "unchecked");
   else {
     const needed = t.srfFactor * spec.fsw;
-    checks.push(verdict("srf", part.srf >= needed ? "pass" : "fail", part.srf / needed - 1));
+    checks.add("srf", part.srf >= needed ? "pass" : "fail", part.srf / needed - 1);
   }
 
   for (const [name, value, key] of LIMITS) {
     const max = t[key];
     if (max === null) continue;
     const v = value(part);
-    checks.push(verdict(name, v === null ? "unchecked" : v <= max ? "pass" : "fail"));
+    checks.add(name, v === null ? "unchecked" : v <= max ? "pass" : "fail");
   }
-
-  if (describe !== null) for (const c of checks) c.reason = reasonFor(c, spec, part, acc, describe);
-  return checks;
 }
 
 const A = (x: number | null) => formatQuantity(x, "A");

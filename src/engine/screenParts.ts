@@ -1,8 +1,8 @@
 import type { Mode, Part, ResultStatus, Spec } from "./types.ts";
 import { effectiveTolerance, inputVoltagePoints } from "./cornerPoints.ts";
-import { CornerSolver, preparePart } from "./evaluateCorner.ts";
+import { CornerSolver, preparePart, type PreparedPart } from "./evaluateCorner.ts";
 import { CornerAccumulator } from "./cornerAccumulator.ts";
-import { partChecks } from "./partChecks.ts";
+import { CheckList, judgeChecks } from "./partChecks.ts";
 import { minimumMargin, statusOf } from "./evaluatePart.ts";
 import { scoreParts } from "./scoreParts.ts";
 import { paretoFront } from "./paretoFront.ts";
@@ -95,6 +95,8 @@ export class PartScreener {
   private spec: Spec;
   private readonly solver: CornerSolver;
   private readonly acc: CornerAccumulator;
+  private readonly checks = new CheckList();
+  private prepared: PreparedPart | undefined;
   private readonly verdict: PartVerdict = {
     status: "pass",
     failures: 0,
@@ -126,7 +128,7 @@ export class PartScreener {
 
   screen(part: Part): PartVerdict {
     const { spec, solver, acc, verdict } = this;
-    const prepared = preparePart(part);
+    const prepared = (this.prepared = preparePart(part, this.prepared));
     const tolerance = effectiveTolerance(spec, part);
     acc.reset(part.isat, spec);
     const { vins, loads } = cornerGrid(spec);
@@ -142,24 +144,26 @@ export class PartScreener {
         }
       }
     }
-    const checks = partChecks(spec, part, acc, null);
+    judgeChecks(spec, part, acc, this.checks);
+    const { items: checks, length: count } = this.checks;
     let failures = 0;
     let saturationMargin = NaN;
     let heatingMargin = NaN;
-    for (const c of checks) {
+    for (let k = 0; k < count; k++) {
+      const c = checks[k]!;
       if (c.status === "fail") failures++;
       if (c.status !== "unchecked" && c.margin !== null) {
         if (c.name === "saturation") saturationMargin = c.margin;
         else if (c.name === "heating") heatingMargin = c.margin;
       }
     }
-    verdict.status = statusOf(checks);
+    verdict.status = statusOf(checks, count);
     verdict.failures = failures;
     verdict.peak = acc.peakAt < 0 ? NaN : acc.peak;
     verdict.irms = acc.irmsAt < 0 ? NaN : acc.irms;
     verdict.totalLoss = acc.totalLossAt < 0 ? NaN : acc.totalLoss;
     verdict.tempRise = acc.tempRiseAt < 0 ? NaN : acc.tempRise;
-    verdict.minMargin = minimumMargin(checks) ?? NaN;
+    verdict.minMargin = minimumMargin(checks, count) ?? NaN;
     verdict.saturationMargin = saturationMargin;
     verdict.heatingMargin = heatingMargin;
     verdict.unreachable = acc.firstUnreachable >= 0;
@@ -273,25 +277,28 @@ export function rankFigures(spec: Spec, parts: readonly Part[], figures: PartFig
   const { status, totalLoss, minMargin, unreachable, failures } = figures;
   const n = parts.length;
   const { footprint, height, price, volume: partVolume } = partColumns(parts);
-  const anyPass = status.includes("pass");
+  let anyPass = false;
+  for (let i = 0; i < n && !anyPass; i++) anyPass = status[i] === "pass";
   const reference = new Uint8Array(n);
   const loss = new Float64Array(n);
   // The trade-off front is drawn among the parts that did not fail.
   const frontLoss = new Float64Array(n);
   const frontVolume = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const pass = status[i] === "pass";
-    reference[i] = !anyPass || pass ? 1 : 0;
+    const s = status[i];
+    reference[i] = !anyPass || s === "pass" ? 1 : 0;
     // A part that cannot reach the output at some corner has no meaningful loss figure.
     loss[i] = unreachable[i] ? NaN : totalLoss[i]!;
-    const counted = status[i] !== "fail";
+    const counted = s !== "fail";
     frontLoss[i] = counted ? totalLoss[i]! : NaN;
     frontVolume[i] = counted ? partVolume[i]! : NaN;
   }
   const score = scoreParts({ loss, footprint, height, price, margin: minMargin }, reference, spec.weights);
   const front = paretoFront(frontLoss, frontVolume);
   const order = rankOrder(status, score, failures);
-  return { count: n, ...figures, score, pareto: Uint8Array.from(front, (f) => (f ? 1 : 0)), order };
+  const pareto = new Uint8Array(n);
+  for (let i = 0; i < n; i++) if (front[i]) pareto[i] = 1;
+  return { count: n, ...figures, score, pareto, order };
 }
 
 /** Evaluates every part at every corner and ranks them. */
