@@ -4,7 +4,7 @@ import { importPartList } from "../../src/catalog/importPartList.ts";
 import { parseSpec } from "../../src/engine/parseSpec.ts";
 import { screenParts } from "../../src/engine/screenParts.ts";
 import type { Spec } from "../../src/engine/types.ts";
-import { RankingClient } from "../../src/worker/rankingClient.ts";
+import { chunkRanges, RankingClient } from "../../src/worker/rankingClient.ts";
 import type { Ranking } from "../../src/worker/finishRanking.ts";
 import type { RankRequest } from "../../src/worker/protocol.ts";
 import { FakeRankWorker } from "./fakeWorkers.ts";
@@ -48,8 +48,8 @@ describe("RankingClient", () => {
   });
 
   it("RankingClient hands a long list out in ranges as workers come back and still ranks like screenParts", async () => {
-    // 20 copies of the demo list (6 160 parts) make several ranges per worker.
-    const many = Array.from({ length: 20 }, (_, copy) => parts.map((p) => ({ ...p, partNumber: `${p.partNumber}-${copy}` }))).flat();
+    // 40 copies of the demo list (12 320 parts) make three ranges per worker.
+    const many = Array.from({ length: 40 }, (_, copy) => parts.map((p) => ({ ...p, partNumber: `${p.partNumber}-${copy}` }))).flat();
     const workers = Array.from({ length: 2 }, () => new FakeRankWorker());
     const screened: number[][] = workers.map(() => []);
     workers.forEach((w, k) => {
@@ -122,5 +122,20 @@ describe("RankingClient", () => {
     c.rank(spec, 7, parts.length);
     await done;
     expect(events.failed[0]).toMatch(/catalog 7/);
+  });
+
+  it("chunkRanges cuts a list into equal ranges, the same number per worker, covering it once", () => {
+    for (const [count, workers] of [[0, 2], [1, 2], [308, 2], [10_000, 2], [12_320, 2], [100_000, 2], [100_000, 3], [7, 4]] as const) {
+      const ranges = chunkRanges(count, workers);
+      const covered = ranges.flatMap((r) => Array.from({ length: r.to - r.from }, (_, i) => r.from + i));
+      expect(covered).toEqual(Array.from({ length: count }, (_, i) => i));
+      if (count >= workers * 2000) {
+        expect(ranges.length % workers).toBe(0);
+        const sizes = ranges.map((r) => r.to - r.from);
+        expect(Math.max(...sizes) - Math.min(...sizes)).toBeLessThanOrEqual(1);
+      }
+    }
+    expect(chunkRanges(10_000, 2)).toHaveLength(4);
+    expect(chunkRanges(100_000, 2)).toHaveLength(12);
   });
 });
