@@ -99,7 +99,8 @@ function collectRows(names: readonly string[], pnColumn: number, extraColumns: r
   const columnCount = names.length;
   const kept: (Part | null)[] = [];
   const keptRows: number[] = [];
-  const keptExtra: (Record<string, string> | null)[] = [];
+  /** The kept rows' cells of unread columns, by index in `kept` (most rows have none). */
+  const keptExtra: { at: number; cells: Record<string, string> }[] = [];
   // A replaced duplicate's cells are read again from the text at the end rather than every row's
   // cells being held until then (100 000 rows of them in memory, for the few that need them).
   const cellsToRead: { rejected: number; line: number }[] = [];
@@ -142,7 +143,7 @@ function collectRows(names: readonly string[], pnColumn: number, extraColumns: r
     kept.push(result);
     keptRows.push(line);
     plausibility.add(result, line);
-    keptExtra.push(extra);
+    if (extra !== null) keptExtra.push({ at: kept.length - 1, cells: extra });
   }
   return state;
 }
@@ -230,16 +231,23 @@ export function importPartList(text: string, options: ImportOptions = {}): Impor
   for (const c of cellsToRead) (rejected[c.rejected] as RejectedRow).cells = reread.get(c.line) ?? [];
   for (const p of problems) warnings.push({ row: p.line, field: null, message: p.message });
 
-  const parts: Part[] = [];
-  const partRows: number[] = [];
+  // Without replaced duplicates every kept row is a part, in order.
+  const complete = cellsToRead.length === 0;
+  const parts: Part[] = complete ? (kept as Part[]) : [];
+  const partRows: number[] = complete ? keptRows : [];
+  if (!complete) {
+    for (let i = 0; i < kept.length; i++) {
+      const p = kept[i] as Part | null;
+      if (p === null) continue;
+      parts.push(p);
+      partRows.push(keptRows[i] as number);
+    }
+  }
   const extra: Record<string, Record<string, string>> = Object.create(null) as Record<string, Record<string, string>>;
-  kept.forEach((p, i) => {
-    if (p === null) return;
-    parts.push(p);
-    partRows.push(keptRows[i] as number);
-    const e = keptExtra[i];
-    if (e !== null && e !== undefined) extra[p.partNumber] = e;
-  });
+  for (const { at, cells: e } of keptExtra) {
+    const p = kept[at];
+    if (p !== null && p !== undefined) extra[p.partNumber] = e;
+  }
   warnings.push(...plausibility.warnings(parts, partRows));
   rejected.sort((a, b) => a.row - b.row);
   // File-level warnings (row null) first, then by line; the sort is stable within a line.

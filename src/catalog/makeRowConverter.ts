@@ -75,7 +75,7 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
   for (const p of plans) byQuantity.set(p.quantity, p);
   const pnPlan = byQuantity.get("partNumber");
   const lPlan = byQuantity.get("inductance");
-  const texts: TextColumn[] = plans
+  const textColumns: TextColumn[] = plans
     .filter((p) => p.quantity === "maker" || p.quantity === "series" || p.quantity === "material")
     .map((p) => ({ column: p.column, quantity: p.quantity as TextColumn["quantity"], lastRaw: "", lastTrimmed: "" }));
   const numbers: NumberColumn[] = plans
@@ -99,7 +99,9 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
   const seriesSaturation = new Map<string, "soft" | "hard">();
   for (const [series, character] of Object.entries(setup.seriesSaturation ?? {})) seriesSaturation.set(series.trim().toLowerCase(), character);
   const headerOf = (plan: ColumnPlan) => names[plan.column] ?? null;
+  // The row's numbers and texts, reused for every row: partFromFields copies out of them.
   const fields = new Float64Array(PART_NUMBER_FIELDS.length);
+  const texts: PartTexts = { partNumber: "", maker: null, series: null, material: null, saturation: null, coreLoss: null };
   const inductanceSlot = PART_FIELD_SLOT.inductance;
   const materialSaturation = new Map<string, SaturationCharacter | null>();
   // Shared by all rows (rows are converted one at a time): no closure is made per row.
@@ -120,7 +122,13 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
       return { field: "inductance", header: null, reason: 'missing inductance: no inductance column recognised (map one with "Header=inductance:uH")' };
     }
     fields.fill(NaN);
-    const input: PartTexts = { partNumber, maker: null, series: null, material: null, saturation: null, coreLoss: null };
+    const input = texts;
+    input.partNumber = partNumber;
+    input.maker = null;
+    input.series = null;
+    input.material = null;
+    input.saturation = null;
+    input.coreLoss = null;
     let notes: RowWarning[] | null = null;
     const core: (number | undefined)[] | null = hasCore ? [undefined, undefined, undefined, undefined, undefined] : null;
     state.error = null;
@@ -142,11 +150,11 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
     }
     for (let k = 0; k < numbers.length; k++) {
       const col = numbers[k] as NumberColumn;
-      if (cells.cellLength(col.column) === 0) continue;
       // Plain decimals (nearly every cell) are read in place in one scan; the full parser takes the rest.
       let v = cells.plainNumber(col.column, col.unit, decimalComma);
       let raw: string | null = null;
       if (Number.isNaN(v)) {
+        if (cells.cellLength(col.column) === 0) continue;
         raw = cells.cell(col.column);
         const res = parseNumberCell(raw, col.ctx);
         if (res.kind === "missing") continue;
@@ -170,7 +178,7 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
     if (e !== null) return more === null ? e : { ...e, reason: `${e.reason}; also ${more.join(", ")}` };
     if (Number.isNaN(fields[inductanceSlot])) return { field: "inductance", header: headerOf(lPlan), reason: "missing inductance" };
 
-    for (const col of texts) {
+    for (const col of textColumns) {
       let t = col.lastTrimmed;
       if (!cells.cellIs(col.column, col.lastRaw)) {
         col.lastRaw = cells.cell(col.column);
