@@ -34,21 +34,34 @@ interface Job {
 }
 
 /**
- * The list is cut into equal ranges, up to this many per worker and the same number for each,
- * handed out one at a time as workers come back, so that a worker slowed by anything else on the
- * machine takes fewer of them and both finish together. Ranges below MIN_CHUNK parts are not
- * worth a round trip, but a short list is still split once per worker: 10 000 parts in five
- * ranges of 2 000 left one worker three of them while the other idled after two.
+ * Ranges of the list, handed out one at a time as workers come back, so that a worker slowed by
+ * anything else on the machine takes fewer of them. Ranges under MIN_CHUNK parts are not worth a
+ * round trip. A long list gets ranges that shrink as it is used up (each a 2·workers-th of what
+ * is left): large first ranges keep the round trips few, small last ones keep the workers
+ * finishing together. A shorter list is cut into equal ranges, the same number per worker (up to
+ * EVEN_PER_WORKER): 10 000 parts in five ranges of 2 000 left one worker three of them while the
+ * other idled after two.
  */
-const CHUNKS_PER_WORKER = 6;
 const MIN_CHUNK = 2000;
+const EVEN_PER_WORKER = 4;
 
 export function chunkRanges(count: number, workers: number): { from: number; to: number }[] {
-  const perWorker = Math.max(1, Math.min(CHUNKS_PER_WORKER, Math.floor(count / (workers * MIN_CHUNK))));
-  const pieces = Math.max(1, Math.min(count, workers * perWorker));
   const ranges: { from: number; to: number }[] = [];
-  // Range k starts at ⌊k·count/pieces⌋: sizes differ by one part at most.
-  for (let k = 0; k < pieces; k++) ranges.push({ from: Math.floor((k * count) / pieces), to: Math.floor(((k + 1) * count) / pieces) });
+  if (count < 2 * workers * EVEN_PER_WORKER * MIN_CHUNK) {
+    const perWorker = Math.max(1, Math.min(EVEN_PER_WORKER, Math.floor(count / (workers * MIN_CHUNK))));
+    const pieces = Math.max(1, Math.min(count, workers * perWorker));
+    // Range k starts at ⌊k·count/pieces⌋: sizes differ by one part at most.
+    for (let k = 0; k < pieces; k++) ranges.push({ from: Math.floor((k * count) / pieces), to: Math.floor(((k + 1) * count) / pieces) });
+    return ranges;
+  }
+  for (let from = 0; from < count; ) {
+    const left = count - from;
+    let size = Math.max(MIN_CHUNK, Math.ceil(left / (2 * workers)));
+    // A remainder under half a minimum range goes with this one.
+    if (left - size < MIN_CHUNK / 2) size = left;
+    ranges.push({ from, to: from + size });
+    from += size;
+  }
   return ranges;
 }
 

@@ -124,18 +124,23 @@ describe("RankingClient", () => {
     expect(events.failed[0]).toMatch(/catalog 7/);
   });
 
-  it("chunkRanges cuts a list into equal ranges, the same number per worker, covering it once", () => {
-    for (const [count, workers] of [[0, 2], [1, 2], [308, 2], [10_000, 2], [12_320, 2], [100_000, 2], [100_000, 3], [7, 4]] as const) {
+  it("chunkRanges covers the list once: a short list in equal ranges, the same number per worker; a long one in ranges that shrink toward the end", () => {
+    for (const [count, workers] of [[0, 2], [1, 2], [308, 2], [7_999, 2], [10_000, 2], [12_320, 2], [100_000, 2], [100_000, 3], [7, 4]] as const) {
       const ranges = chunkRanges(count, workers);
       const covered = ranges.flatMap((r) => Array.from({ length: r.to - r.from }, (_, i) => r.from + i));
       expect(covered).toEqual(Array.from({ length: count }, (_, i) => i));
-      if (count >= workers * 2000) {
-        expect(ranges.length % workers).toBe(0);
-        const sizes = ranges.map((r) => r.to - r.from);
+      const sizes = ranges.map((r) => r.to - r.from);
+      if (count < workers * 16_000) {
+        expect(ranges.length % Math.min(count, workers) || 0).toBe(0);
         expect(Math.max(...sizes) - Math.min(...sizes)).toBeLessThanOrEqual(1);
+      } else {
+        for (let k = 1; k < sizes.length - 1; k++) expect(sizes[k]).toBeLessThanOrEqual(sizes[k - 1]!);
+        expect(Math.min(...sizes.slice(0, -1))).toBeGreaterThanOrEqual(2000);
+        expect(sizes.at(-1)).toBeGreaterThanOrEqual(1000);
       }
     }
-    expect(chunkRanges(10_000, 2)).toHaveLength(4);
-    expect(chunkRanges(100_000, 2)).toHaveLength(12);
+    expect(chunkRanges(10_000, 2).map((r) => r.to - r.from)).toEqual([2500, 2500, 2500, 2500]);
+    expect(chunkRanges(100_000, 2).map((r) => r.to - r.from).slice(0, 3)).toEqual([25_000, 18_750, 14_063]);
   });
+
 });
