@@ -38,6 +38,10 @@ export function rankOrder(status: ArrayLike<ResultStatus>, score: ArrayLike<numb
     keys[i] = ((statusRank * FAILURE_CLASSES + failureRank) * (SCORE_STEPS + 1) + q) * INDEX_BITS + i;
   }
   keys.sort();
-  for (let i = 0; i < n; i++) order[i] = keys[i]! % INDEX_BITS;
+  // The index is the key's low 21 bits; k − ⌊k/2^21⌋·2^21 is exact (k < 2^53) and much quicker than %.
+  for (let i = 0; i < n; i++) {
+    const k = keys[i]!;
+    order[i] = k - Math.floor(k / INDEX_BITS) * INDEX_BITS;
+  }
   return order;
 }
