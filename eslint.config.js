@@ -7,7 +7,7 @@ const engineMustStayPure =
   "src/engine is a pure computation core (plain data in, plain data out): it must not depend on UI, state, I/O or parsing libraries.";
 
 export default tseslint.config(
-  { ignores: ["dist/", "dist-bench/", "node_modules/", "e2e-artifacts/", "test-results/", "bench-results/"] },
+  { ignores: ["dist/", "dist-*/", "node_modules/", "e2e-artifacts/", "test-results/", "bench-results/"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -35,20 +35,22 @@ interface Job {
 
 /**
  * Ranges of the list, handed out one at a time as workers come back, so that a worker slowed by
- * anything else on the machine takes fewer of them. Ranges under MIN_CHUNK parts are not worth a
- * round trip. A long list gets ranges that shrink as it is used up (each a 2·workers-th of what
- * is left): large first ranges keep the round trips few, small last ones keep the workers
- * finishing together. A shorter list is cut into equal ranges, the same number per worker (up to
- * EVEN_PER_WORKER): 10 000 parts in five ranges of 2 000 left one worker three of them while the
- * other idled after two.
+ * anything else on the machine takes fewer of them. Each range is a round trip through the page,
+ * which may be busy drawing just then, so short lists get few: a list is cut into equal ranges,
+ * the same number per worker, none under EVEN_MIN parts (one each below that; 10 000 parts in
+ * five ranges of 2 000 left one worker three of them while the other idled after two). A long
+ * list gets ranges that shrink as it is used up (each a 2·workers-th of what is left, none under
+ * GUIDED_MIN): large first ranges keep the round trips few, small last ones keep the workers
+ * finishing together.
  */
-const MIN_CHUNK = 2000;
+const EVEN_MIN = 6000;
 const EVEN_PER_WORKER = 4;
+const GUIDED_MIN = 2000;
 
 export function chunkRanges(count: number, workers: number): { from: number; to: number }[] {
   const ranges: { from: number; to: number }[] = [];
-  if (count < 2 * workers * EVEN_PER_WORKER * MIN_CHUNK) {
-    const perWorker = Math.max(1, Math.min(EVEN_PER_WORKER, Math.floor(count / (workers * MIN_CHUNK))));
+  if (count < workers * EVEN_PER_WORKER * EVEN_MIN) {
+    const perWorker = Math.max(1, Math.min(EVEN_PER_WORKER, Math.floor(count / (workers * EVEN_MIN))));
     const pieces = Math.max(1, Math.min(count, workers * perWorker));
     // Range k starts at ⌊k·count/pieces⌋: sizes differ by one part at most.
     for (let k = 0; k < pieces; k++) ranges.push({ from: Math.floor((k * count) / pieces), to: Math.floor(((k + 1) * count) / pieces) });
@@ -56,9 +58,9 @@ export function chunkRanges(count: number, workers: number): { from: number; to:
   }
   for (let from = 0; from < count; ) {
     const left = count - from;
-    let size = Math.max(MIN_CHUNK, Math.ceil(left / (2 * workers)));
+    let size = Math.max(GUIDED_MIN, Math.ceil(left / (2 * workers)));
     // A remainder under half a minimum range goes with this one.
-    if (left - size < MIN_CHUNK / 2) size = left;
+    if (left - size < GUIDED_MIN / 2) size = left;
     ranges.push({ from, to: from + size });
     from += size;
   }
@@ -183,6 +185,8 @@ export class RankingClient {
         job.doneBefore += reply.slice.status.length;
         job.progress[worker] = 0;
         this.handOut(job, worker);
+        // Workers report progress only now and then (PROGRESS_MS); a finished range always counts.
+        this.listener.onProgress(job.job, job.doneBefore + job.progress.reduce((a, b) => a + b, 0), job.count);
         if (job.slices.length < job.chunks) return;
         const slices = job.slices;
         job.slices = [];

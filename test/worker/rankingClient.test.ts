@@ -48,8 +48,8 @@ describe("RankingClient", () => {
   });
 
   it("RankingClient hands a long list out in ranges as workers come back and still ranks like screenParts", async () => {
-    // 40 copies of the demo list (12 320 parts) make three ranges per worker.
-    const many = Array.from({ length: 40 }, (_, copy) => parts.map((p) => ({ ...p, partNumber: `${p.partNumber}-${copy}` }))).flat();
+    // 80 copies of the demo list (24 640 parts) make two ranges per worker.
+    const many = Array.from({ length: 80 }, (_, copy) => parts.map((p) => ({ ...p, partNumber: `${p.partNumber}-${copy}` }))).flat();
     const workers = Array.from({ length: 2 }, () => new FakeRankWorker());
     const screened: number[][] = workers.map(() => []);
     workers.forEach((w, k) => {
@@ -125,21 +125,23 @@ describe("RankingClient", () => {
   });
 
   it("chunkRanges covers the list once: a short list in equal ranges, the same number per worker; a long one in ranges that shrink toward the end", () => {
-    for (const [count, workers] of [[0, 2], [1, 2], [308, 2], [7_999, 2], [10_000, 2], [12_320, 2], [100_000, 2], [100_000, 3], [7, 4]] as const) {
+    for (const [count, workers] of [[0, 2], [1, 2], [308, 2], [10_000, 2], [24_640, 2], [47_999, 2], [48_000, 2], [100_000, 2], [100_000, 3], [7, 4]] as const) {
       const ranges = chunkRanges(count, workers);
       const covered = ranges.flatMap((r) => Array.from({ length: r.to - r.from }, (_, i) => r.from + i));
       expect(covered).toEqual(Array.from({ length: count }, (_, i) => i));
       const sizes = ranges.map((r) => r.to - r.from);
-      if (count < workers * 16_000) {
+      if (count < workers * 24_000) {
         expect(ranges.length % Math.min(count, workers) || 0).toBe(0);
         expect(Math.max(...sizes) - Math.min(...sizes)).toBeLessThanOrEqual(1);
       } else {
         for (let k = 1; k < sizes.length - 1; k++) expect(sizes[k]).toBeLessThanOrEqual(sizes[k - 1]!);
         expect(Math.min(...sizes.slice(0, -1))).toBeGreaterThanOrEqual(2000);
+        expect(sizes[0]).toBe(Math.ceil(count / (2 * workers)));
         expect(sizes.at(-1)).toBeGreaterThanOrEqual(1000);
       }
     }
-    expect(chunkRanges(10_000, 2).map((r) => r.to - r.from)).toEqual([2500, 2500, 2500, 2500]);
+    expect(chunkRanges(10_000, 2).map((r) => r.to - r.from)).toEqual([5000, 5000]);
+    expect(chunkRanges(24_640, 2).map((r) => r.to - r.from)).toEqual([6160, 6160, 6160, 6160]);
     expect(chunkRanges(100_000, 2).map((r) => r.to - r.from).slice(0, 3)).toEqual([25_000, 18_750, 14_063]);
   });
 
