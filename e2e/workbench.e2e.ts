@@ -117,10 +117,20 @@ test("from a vendor file to a compared shortlist, kept across a reload", async (
   const summary = page.getByRole("status").filter({ hasText: /60 parts: ✓/ });
   const before = await summary.innerText();
   const orderBefore = await topParts(page, 10);
+  // A quick re-ranking is announced (aria-busy) but not drawn: no dimmed table, no progress bar flashing by.
+  await page.evaluate(() => {
+    const w = globalThis as unknown as { __marks: string[] };
+    w.__marks = [];
+    new MutationObserver(() => {
+      if (document.querySelector(".rtable.stale") !== null) w.__marks.push("dimmed");
+      if (document.querySelector('.table-meta [role="progressbar"]') !== null) w.__marks.push("progress");
+    }).observe(document.body, { subtree: true, childList: true, attributes: true });
+  });
   await page.locator("#quick-vin-max").fill("24");
   await expect(summary).not.toHaveText(before, { timeout: 30_000 });
   await rankingSettled(page, 60);
   expect(await topParts(page, 10)).not.toEqual(orderBefore);
+  expect(await page.evaluate(() => (globalThis as unknown as { __marks: string[] }).__marks)).toEqual([]);
   await shot(page, "11-ranking-vin-max-24");
 
   // Everything kept across a reload.

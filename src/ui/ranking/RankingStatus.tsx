@@ -3,10 +3,13 @@ import { useDraftReading } from "../../state/draftStore.ts";
 import { draftProblemCount } from "../../state/specDraft.ts";
 import { showScreen } from "../../state/workspaceActions.ts";
 import { ProgressBar } from "../common/ProgressBar.tsx";
+import { BUSY_MARK_DELAY_MS } from "../common/busyMark.ts";
+import { useDelayedFlag } from "../common/useDelayedFlag.ts";
 
 /** What the table shows: counts, how long the ranking took, a re-ranking in progress, a spec with problems. */
 export function RankingStatus() {
   const s = useRanking((r) => r);
+  const showProgress = useDelayedFlag(s.status === "ranking", BUSY_MARK_DELAY_MS);
   const problems = draftProblemCount(useDraftReading());
   const r = s.ranking;
   const incomplete = r === null ? 0 : r.status.reduce((n, code) => n + (code === 1 ? 1 : 0), 0);
@@ -20,7 +23,7 @@ export function RankingStatus() {
           {s.elapsed !== null && <span className="muted"> · ranked in {Math.round(s.elapsed).toLocaleString("en")} ms</span>}
         </span>
       )}
-      {s.status === "ranking" && <ProgressBar label={`Ranking ${s.total.toLocaleString("en")} parts`} done={s.done} total={s.total} />}
+      {showProgress && <ProgressBar label={`Ranking ${s.total.toLocaleString("en")} parts`} done={s.done} total={s.total} />}
       {s.status === "failed" && (
         <span className="field-error">
           <span aria-hidden="true">✗ </span>Ranking failed: {s.message}

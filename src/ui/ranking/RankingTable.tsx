@@ -8,6 +8,8 @@ import { useExtras } from "../../state/extrasStore.ts";
 import { useWorkspace } from "../../state/workspaceStore.ts";
 import { COLUMNS, GRID_TEMPLATE, TABLE_WIDTH } from "./columns.tsx";
 import { RankingRow } from "./RankingRow.tsx";
+import { BUSY_MARK_DELAY_MS } from "../common/busyMark.ts";
+import { useDelayedFlag } from "../common/useDelayedFlag.ts";
 
 const ROW_HEIGHT = 30;
 /** A first guess for a row with its reasons open; it is measured once drawn. */
@@ -41,6 +43,8 @@ export interface RankingTableProps {
  * page, so 100 000 parts scroll as smoothly as 100.
  */
 export function RankingTable({ indices, parts, ranking, spec, serial, stale }: RankingTableProps) {
+  // aria-busy says so at once; the table is dimmed only for a ranking that takes a while.
+  const showStale = useDelayedFlag(stale, BUSY_MARK_DELAY_MS);
   const scroller = useRef<HTMLDivElement>(null);
   const sort = useWorkspace((w) => w.view.rankingSort);
   const shortlist = useWorkspace((w) => w.shortlist);
@@ -62,7 +66,7 @@ export function RankingTable({ indices, parts, ranking, spec, serial, stale }: R
   return (
     <div
       ref={scroller}
-      className={`rtable${stale ? " stale" : ""}`}
+      className={`rtable${showStale ? " stale" : ""}`}
       role="table"
       aria-label="Ranked parts"
       aria-rowcount={indices.length + 1}
