@@ -5,10 +5,14 @@
  * fold in place; keys with other characters are folded once with toUpperCase.
  */
 export class KeyIndex {
-  private slots = new Int32Array(1024);
+  /**
+   * Open addressing, two Int32 words per slot: [entry + 1, hash]. The hash beside the entry lets
+   * a probe pass an occupied slot without touching the keys: with 100 000 keys the table is
+   * larger than the caches and every separate array read was a miss.
+   */
+  private slots = new Int32Array(2048);
   private mask = 1023;
   private readonly keys: string[] = [];
-  private readonly hashes: number[] = [];
   private readonly values: number[] = [];
 
   get size(): number {
@@ -20,9 +24,9 @@ export class KeyIndex {
     let h = asciiHash(key);
     if (h < 0) h = hash((k = key.toUpperCase()));
     for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
-      const e = this.slots[s] as number;
+      const e = this.slots[2 * s] as number;
       if (e === 0) return undefined;
-      if (this.hashes[e - 1] === h && sameFolded(this.keys[e - 1] as string, k)) return this.values[e - 1];
+      if (this.slots[2 * s + 1] === h && sameFolded(this.keys[e - 1] as string, k)) return this.values[e - 1];
     }
   }
 
@@ -36,16 +40,16 @@ export class KeyIndex {
     let h = asciiHash(key);
     if (h < 0) h = hash((k = key.toUpperCase()));
     for (let s = h & this.mask; ; s = (s + 1) & this.mask) {
-      const e = this.slots[s] as number;
+      const e = this.slots[2 * s] as number;
       if (e === 0) {
         this.keys.push(k);
-        this.hashes.push(h);
         this.values.push(value);
-        this.slots[s] = this.keys.length;
+        this.slots[2 * s] = this.keys.length;
+        this.slots[2 * s + 1] = h;
         if (this.keys.length * 2 > this.mask) this.grow();
         return undefined;
       }
-      if (this.hashes[e - 1] === h && sameFolded(this.keys[e - 1] as string, k)) {
+      if (this.slots[2 * s + 1] === h && sameFolded(this.keys[e - 1] as string, k)) {
         const earlier = this.values[e - 1];
         this.values[e - 1] = value;
         return earlier;
@@ -54,13 +58,18 @@ export class KeyIndex {
   }
 
   private grow(): void {
+    const old = this.slots;
     const size = (this.mask + 1) * 4;
-    this.slots = new Int32Array(size);
+    this.slots = new Int32Array(2 * size);
     this.mask = size - 1;
-    for (let e = 0; e < this.keys.length; e++) {
-      let s = (this.hashes[e] as number) & this.mask;
-      while (this.slots[s] !== 0) s = (s + 1) & this.mask;
-      this.slots[s] = e + 1;
+    for (let o = 0; o < old.length; o += 2) {
+      const e = old[o] as number;
+      if (e === 0) continue;
+      const h = old[o + 1] as number;
+      let s = h & this.mask;
+      while (this.slots[2 * s] !== 0) s = (s + 1) & this.mask;
+      this.slots[2 * s] = e;
+      this.slots[2 * s + 1] = h;
     }
   }
 }
@@ -77,14 +86,14 @@ function asciiHash(key: string): number {
     if (c > 127) return -1;
     h = Math.imul(h ^ upper(c), 0x01000193);
   }
-  return h >>> 0;
+  return h & 0x7fffffff;
 }
 
-/** FNV-1a over upper-cased ASCII. */
+/** FNV-1a over upper-cased ASCII, kept to 31 bits so that it fits an Int32Array slot. */
 function hash(key: string): number {
   let h = 0x811c9dc5;
   for (let i = 0; i < key.length; i++) h = Math.imul(h ^ upper(key.charCodeAt(i)), 0x01000193);
-  return h >>> 0;
+  return h & 0x7fffffff;
 }
 
 function sameFolded(a: string, b: string): boolean {

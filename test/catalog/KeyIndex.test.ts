@@ -13,6 +13,8 @@ describe("KeyIndex", () => {
     expect(k.get("other")).toBeUndefined();
     k.set("µ-part", 3);
     expect(k.get("Μ-PART")).toBe(3); // String.prototype.toUpperCase folds µ to Greek capital mu
+    k.set("ff-2", 4);
+    expect(k.get("\ufb00-2")).toBe(4); // the ligature ﬀ upper-cases to "FF": both spellings meet in one slot
   });
 
   it("KeyIndex agrees with a Map over upper-cased keys, put returning the value it replaces (reference: the built-in Map)", () => {
