@@ -1,7 +1,7 @@
 import type { Part, Result, Spec } from "./types.ts";
 import { evaluatePart, type PartEvaluation } from "./evaluatePart.ts";
 import { CornerSolver } from "./evaluateCorner.ts";
-import { rankFigures, type PartFigures, type Screening } from "./screenParts.ts";
+import { emptyFigures, rankFigures, type PartFigures, type Screening } from "./screenParts.ts";
 
 /** Full results (corners, checks with reasons) in rank order for the ranks in [from, to). */
 export function rankedResults(
@@ -37,18 +37,9 @@ export function rankedResults(
 
 /** The screening figures of parts already evaluated in full (the same solver, so the same numbers). */
 function figuresOf(evaluations: readonly PartEvaluation[]): PartFigures {
-  const n = evaluations.length;
-  const figures: PartFigures = {
-    status: evaluations.map((e) => e.status),
-    failures: new Uint8Array(n),
-    peak: new Float64Array(n),
-    irms: new Float64Array(n),
-    totalLoss: new Float64Array(n),
-    tempRise: new Float64Array(n),
-    minMargin: new Float64Array(n),
-    unreachable: new Uint8Array(n),
-  };
+  const figures = emptyFigures(evaluations.length);
   evaluations.forEach((e, i) => {
+    figures.status[i] = e.status;
     figures.failures[i] = e.failures.length;
     figures.peak[i] = e.worst.peakMagnitude.value;
     figures.irms[i] = e.worst.irms.value;

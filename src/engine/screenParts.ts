@@ -172,13 +172,9 @@ export class PartScreener {
   }
 }
 
-/**
- * Evaluates parts[from, to) at every corner. Slices can be computed apart (in several workers)
- * and joined with joinFigures before rankFigures.
- */
-export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to = parts.length, options: ScreenOptions = {}): PartFigures {
-  const n = Math.max(0, Math.min(to, parts.length) - from);
-  const figures: PartFigures = {
+/** Figures for n parts, to be filled in (status entries unset). */
+export function emptyFigures(n: number): PartFigures {
+  return {
     status: new Array<ResultStatus>(n),
     failures: new Uint8Array(n),
     peak: new Float64Array(n),
@@ -188,6 +184,14 @@ export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to =
     minMargin: new Float64Array(n),
     unreachable: new Uint8Array(n),
   };
+}
+
+/**
+ * Evaluates parts[from, to) at every corner. Slices can be computed apart (in several workers)
+ * and joined with joinFigures before rankFigures.
+ */
+export function screenFigures(spec: Spec, parts: readonly Part[], from = 0, to = parts.length, options: ScreenOptions = {}): PartFigures {
+  const figures = emptyFigures(Math.max(0, Math.min(to, parts.length) - from));
   // One screener for the thread (see PartScreener); a call from within onProgress gets its own.
   const screener = idleScreener?.aim(spec) ?? new PartScreener(spec);
   idleScreener = null;
