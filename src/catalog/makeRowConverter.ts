@@ -1,5 +1,5 @@
-import { PART_FIELD_SLOT, PART_NUMBER_FIELDS, partFromFields, saturationFromMaterial, type PartTexts } from "../engine/partDefaults.ts";
-import type { Part, SaturationCharacter } from "../engine/types.ts";
+import { PART_FIELD_SLOT, PART_NUMBER_FIELDS, partFromFields, type PartTexts } from "../engine/partDefaults.ts";
+import type { Part } from "../engine/types.ts";
 import type { ColumnPlan } from "./mapColumns.ts";
 import { parseDimensionsCell } from "./parseDimensionsCell.ts";
 import { parseNumberCell, type CellContext } from "./parseNumberCell.ts";
@@ -103,7 +103,6 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
   const fields = new Float64Array(PART_NUMBER_FIELDS.length);
   const texts: PartTexts = { partNumber: "", maker: null, series: null, material: null, saturation: null, coreLoss: null };
   const inductanceSlot = PART_FIELD_SLOT.inductance;
-  const materialSaturation = new Map<string, SaturationCharacter | null>();
   // Shared by all rows (rows are converted one at a time): no closure is made per row.
   const state: { error: RowRejection | null; others: string[] | null } = { error: null, others: null };
   const fail = (field: string, header: string | null, reason: string) => {
@@ -204,18 +203,10 @@ export function makeRowConverter(setup: ConverterSetup): (cells: RecordCells, wa
         (notes ??= []).push({ row: line, field: "coreLoss", message: `${partNumber}: core-loss data incomplete (no ${missing.join(", ")}): core loss not modelled` });
       }
     }
+    // A per-series choice comes first; without one partFromFields reads the material (cached there).
     if (seriesSaturation.size > 0 && typeof input.series === "string") {
       const character = seriesSaturation.get(input.series.toLowerCase());
       if (character !== undefined) input.saturation = character;
-    }
-    if (input.saturation === null && typeof input.material === "string") {
-      // Same answer completePart would give, looked up once per distinct material text.
-      let character = materialSaturation.get(input.material);
-      if (character === undefined) {
-        character = saturationFromMaterial(input.material);
-        materialSaturation.set(input.material, character);
-      }
-      if (character !== null) input.saturation = character;
     }
     if (notes !== null) for (const n of notes) warnings.push(n);
     return partFromFields(input, fields);
