@@ -16,7 +16,7 @@ export interface PartEvaluation {
 }
 
 /** Smallest current margin: saturation or heating headroom as a fraction, null when neither is known. */
-/** Over the first `count` checks (all of them, or a CheckList's current ones). */
+/** Over the first `count` checks (all of them, or a CheckBuffer's current ones). */
 export function minimumMargin(checks: readonly Check[], count = checks.length): number | null {
   let smallest: number | null = null;
   for (let k = 0; k < count; k++) {

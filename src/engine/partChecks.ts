@@ -10,7 +10,7 @@ export type DescribeCorner = ((index: number) => string) | null;
  * The checks of one part as they are judged. Reusable: clear() keeps the Check objects, so
  * ranking a list makes them once rather than a dozen per part; `items[0, length)` are this part's.
  */
-export class CheckList {
+export class CheckBuffer {
   readonly items: Check[] = [];
   length = 0;
 
@@ -50,7 +50,7 @@ const LIMITS = [
  * Missing data gives "not checked (no data)" rather than a pass.
  */
 export function partChecks(spec: Spec, part: Part, acc: CornerAccumulator, describe: DescribeCorner): Check[] {
-  const list = new CheckList();
+  const list = new CheckBuffer();
   judgeChecks(spec, part, acc, list);
   const checks = list.items;
   if (describe !== null) for (const c of checks) c.reason = reasonFor(c, spec, part, acc, describe);
@@ -58,7 +58,7 @@ export function partChecks(spec: Spec, part: Part, acc: CornerAccumulator, descr
 }
 
 /** The verdicts of partChecks, without reasons, into `checks` (cleared first). */
-export function judgeChecks(spec: Spec, part: Part, acc: CornerAccumulator, checks: CheckList): void {
+export function judgeChecks(spec: Spec, part: Part, acc: CornerAccumulator, checks: CheckBuffer): void {
   const t = spec.targets;
   checks.clear();
   if (acc.firstUnreachable >= 0) checks.add("operatingPoint", "fail", null, acc.firstUnreachable);

@@ -2,7 +2,7 @@ import type { Mode, Part, ResultStatus, Spec } from "./types.ts";
 import { effectiveTolerance, inputVoltagePoints } from "./cornerPoints.ts";
 import { CornerSolver, preparePart, type PreparedPart } from "./evaluateCorner.ts";
 import { CornerAccumulator } from "./cornerAccumulator.ts";
-import { CheckList, judgeChecks } from "./partChecks.ts";
+import { CheckBuffer, judgeChecks } from "./partChecks.ts";
 import { minimumMargin, statusOf } from "./evaluatePart.ts";
 import { scoreParts } from "./scoreParts.ts";
 import { paretoFront } from "./paretoFront.ts";
@@ -95,7 +95,7 @@ export class PartScreener {
   private spec: Spec;
   private readonly solver: CornerSolver;
   private readonly acc: CornerAccumulator;
-  private readonly checks = new CheckList();
+  private readonly checks = new CheckBuffer();
   private prepared: PreparedPart | undefined;
   private readonly verdict: PartVerdict = {
     status: "pass",
