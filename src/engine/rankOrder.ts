@@ -1,47 +1,47 @@
 import type { ResultStatus } from "./types.ts";
 
-const STATUS_ORDER: Record<ResultStatus, number> = { pass: 0, incomplete: 1, fail: 2 };
-const INDEX_BITS = 2 ** 21;
 const SCORE_STEPS = 2 ** 20 - 1;
 /** Failing parts with fewer failed checks (near misses) come first; 15 or more count alike. */
 const FAILURE_CLASSES = 16;
+/** The packed key (6 + 20 bits) is sorted in two passes of 13 bits each. */
+const DIGIT_BITS = 13;
+const DIGIT_MASK = 2 ** DIGIT_BITS - 1;
 
 /**
  * Rank order by status (pass, incomplete, fail), then, among failing parts, the number of
- * failed checks (fewest first), then score (high first), ties in list order. Sorts one packed
- * numeric key per part (status · failures · score quantised to 1e-4 · index, 47 bits, exact in a
- * double) with the typed array's native numeric sort instead of a comparator over objects.
- * Lists beyond 2^21 parts fall back to a comparator.
+ * failed checks (fewest first), then score (high first), ties in list order. Each part gets one
+ * packed numeric key (status · failure class · score quantised to 1e-4, 26 bits), sorted by a
+ * stable least-significant-digit radix sort (two counting passes over 13-bit digits): ties keep
+ * list order without a comparator, and 100 000 parts take about a millisecond rather than the
+ * ten of a typed-array sort of 47-bit keys.
  */
 export function rankOrder(status: ArrayLike<ResultStatus>, score: ArrayLike<number>, failures?: ArrayLike<number>): Int32Array {
   const n = status.length;
-  const order = new Int32Array(n);
-  const failureClass = (i: number) => Math.min(FAILURE_CLASSES - 1, failures?.[i] ?? 0);
-  if (n >= INDEX_BITS) {
-    const idx = Array.from({ length: n }, (_, i) => i);
-    idx.sort(
-      (a, b) =>
-        STATUS_ORDER[status[a]!] - STATUS_ORDER[status[b]!] || failureClass(a) - failureClass(b) || score[b]! - score[a]! || a - b,
-    );
-    order.set(idx);
-    return order;
-  }
-  const keys = new Float64Array(n);
+  const keys = new Uint32Array(n);
   for (let i = 0; i < n; i++) {
     const s = score[i]!;
     const q = Number.isFinite(s) ? Math.min(SCORE_STEPS, Math.max(0, Math.round((100 - s) * 1e4))) : SCORE_STEPS;
-    // STATUS_ORDER and failureClass written out: a keyed lookup and a call per part cost more than the sort.
+    // Status and failure class written out: a keyed lookup and a call per part cost more than the sort.
     const st = status[i];
     const statusRank = st === "pass" ? 0 : st === "incomplete" ? 1 : 2;
     const f = failures === undefined ? 0 : failures[i]!;
     const failureRank = f < FAILURE_CLASSES - 1 ? f : FAILURE_CLASSES - 1;
-    keys[i] = ((statusRank * FAILURE_CLASSES + failureRank) * (SCORE_STEPS + 1) + q) * INDEX_BITS + i;
+    keys[i] = (statusRank * FAILURE_CLASSES + failureRank) * (SCORE_STEPS + 1) + q;
   }
-  keys.sort();
-  // The index is the key's low 21 bits; k − ⌊k/2^21⌋·2^21 is exact (k < 2^53) and much quicker than %.
-  for (let i = 0; i < n; i++) {
-    const k = keys[i]!;
-    order[i] = k - Math.floor(k / INDEX_BITS) * INDEX_BITS;
+  const byLow = new Int32Array(n);
+  const order = new Int32Array(n);
+  const counts = new Int32Array(DIGIT_MASK + 2);
+  // Pass 1: list order → stably by the low digit.
+  for (let i = 0; i < n; i++) counts[(keys[i]! & DIGIT_MASK) + 1]!++;
+  for (let d = 1; d < counts.length; d++) counts[d]! += counts[d - 1]!;
+  for (let i = 0; i < n; i++) byLow[counts[keys[i]! & DIGIT_MASK]!++] = i;
+  // Pass 2: stably by the high digit, which leaves the whole key sorted with ties in list order.
+  counts.fill(0);
+  for (let i = 0; i < n; i++) counts[(keys[i]! >>> DIGIT_BITS) + 1]!++;
+  for (let d = 1; d < counts.length; d++) counts[d]! += counts[d - 1]!;
+  for (let k = 0; k < n; k++) {
+    const i = byLow[k]!;
+    order[counts[keys[i]! >>> DIGIT_BITS]!++] = i;
   }
   return order;
 }

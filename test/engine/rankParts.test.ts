@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import fc from "fast-check";
 import { makeSpec } from "../../src/engine/specDefaults.ts";
 import { completePart } from "../../src/engine/partDefaults.ts";
 import { rankParts } from "../../src/engine/rankParts.ts";
@@ -57,6 +58,25 @@ describe("paretoFront", () => {
   it("paretoFront keeps both of two identical undominated points", () => {
     expect(paretoFront([1, 1, 2], [2, 2, 3])).toEqual([true, true, false]);
   });
+
+  it("paretoFront agrees with the definition of dominance on random lists with ties and gaps", () => {
+    // The definition checked pair by pair (O(n²)): on the front unless another point is at least
+    // as good on both costs and better on one; a missing or non-finite cost is never on it.
+    const cost = fc.oneof(fc.integer({ min: 0, max: 12 }), fc.double({ min: 0, max: 1e3, noNaN: true }), fc.constantFrom(null, NaN, Infinity));
+    fc.assert(
+      fc.property(fc.array(fc.tuple(cost, cost), { maxLength: 400 }), (points) => {
+        const a = points.map((p) => p[0]);
+        const b = points.map((p) => p[1]);
+        const finite = (x: number | null): x is number => x !== null && Number.isFinite(x);
+        const expected = points.map(([pa, pb], i) => {
+          if (!finite(pa) || !finite(pb)) return false;
+          return !points.some(([qa, qb], k) => k !== i && finite(qa) && finite(qb) && qa <= pa && qb <= pb && (qa < pa || qb < pb));
+        });
+        expect(paretoFront(a, b)).toEqual(expected);
+      }),
+      { numRuns: 300 },
+    );
+  });
 });
 
 describe("rankOrder", () => {
@@ -71,5 +91,30 @@ describe("rankOrder among failing parts", () => {
   it("rankOrder puts failing parts with fewer failed checks first, whatever their score", () => {
     const status = ["fail", "fail", "fail"] as const;
     expect(Array.from(rankOrder(status, [90, 10, 50], [3, 1, 1]))).toEqual([2, 1, 0]);
+  });
+
+  it("rankOrder equals a comparator sort on status, failure class, score quantised to 1e-4 and list order", () => {
+    // The definition, written as the comparator the radix sort replaces.
+    const rank = { pass: 0, incomplete: 1, fail: 2 } as const;
+    const part = fc.record({
+      status: fc.constantFrom("pass", "incomplete", "fail" as const),
+      failures: fc.integer({ min: 0, max: 20 }),
+      score: fc.oneof(fc.double({ min: -5, max: 105, noNaN: true }), fc.constantFrom(NaN, 0, 100, 50.00004, 50.00006)),
+    });
+    fc.assert(
+      fc.property(fc.array(part, { maxLength: 300 }), (parts) => {
+        const quantised = (s: number) => (Number.isFinite(s) ? Math.min(2 ** 20 - 1, Math.max(0, Math.round((100 - s) * 1e4))) : 2 ** 20 - 1);
+        const expected = parts
+          .map((_, i) => i)
+          .sort((a, b) => {
+            const p = parts[a]!;
+            const q = parts[b]!;
+            return rank[p.status] - rank[q.status] || Math.min(15, p.failures) - Math.min(15, q.failures) || quantised(p.score) - quantised(q.score) || a - b;
+          });
+        const got = rankOrder(parts.map((p) => p.status), parts.map((p) => p.score), parts.map((p) => p.failures));
+        expect(Array.from(got)).toEqual(expected);
+      }),
+      { numRuns: 300 },
+    );
   });
 });
