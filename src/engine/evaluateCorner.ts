@@ -90,8 +90,20 @@ function acLossFactor(solution: WaveformSolution, acFactor: number): number {
 export class CornerSolver {
   readonly solution: WaveformSolution = emptySolution();
   temperature = 0;
-  tempRise: number | null = null;
-  dcrHot: number | null = null;
+  // Kept as plain numbers (NaN for none) and read as number | null: storing a double into a
+  // field that may also hold null makes V8 box it, an allocation at every corner.
+  private riseK = NaN;
+  private dcrHotOhm = NaN;
+  /** Temperature rise, null when the part has no thermal model or the corner is unreachable. */
+  get tempRise(): number | null {
+    const rise = this.riseK;
+    return rise === rise ? rise : null;
+  }
+  /** Winding resistance at the corner's temperature, null without a DCR. */
+  get dcrHot(): number | null {
+    const r = this.dcrHotOhm;
+    return r === r ? r : null;
+  }
   dcrLoss = 0;
   acLoss = 0;
   coreLoss: number | null = null;
@@ -191,24 +203,28 @@ export class CornerSolver {
     } else if (thermal) {
       temperature = this.coldStart(vin, iout, dcr20);
     }
-    let isatSolved = isatFromSlope(part.isat, prepared.isatSlope, temperature);
+    // The calls below are skipped in the common case (no hot Isat, no core-loss data, Fr = 1, where
+    // they return Isat, null and the plain I²R term exactly): V8 inlines only so much into one
+    // function, and this one is at that limit.
+    let isatSolved = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
     this.setCurve(prepared, inductance, isatSolved);
     op.vin = vin;
     op.iout = iout;
     op.drops.dcr = dcr20 === null ? 0 : resistanceFrom20(dcr20, temperature);
     const solution = solveWaveform(op, this.curve, this.solution);
-    let dcrHot = dcr20 === null ? null : op.drops.dcr;
-    let core = coreLossOf(part, solution, spec.fsw);
+    // NaN without a DCR: a local that may hold null would box every double stored in it.
+    let dcrHot = dcr20 === null ? NaN : op.drops.dcr;
+    let core = part.coreLoss === null ? null : coreLossOf(part, solution, spec.fsw);
     // Settle the temperature for this waveform's RMS current and core loss (copper loss ∝ R(T));
     // solve again only while that temperature still moves the winding drop or Isat noticeably.
     for (let iteration = 0; thermal && !solution.unreachable && iteration < THERMAL_ITERATIONS; iteration++) {
-      balance.copperLossAt20 = windingLoss(solution, dcr20, part.acFactor);
+      balance.copperLossAt20 = part.acFactor === 1 ? solution.meanSquare * dcr20 : windingLoss(solution, dcr20, part.acFactor);
       balance.otherLoss = core ?? 0;
       balance.start = temperature;
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
       dcrHot = resistanceFrom20(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
-      const isatNow = isatFromSlope(part.isat, prepared.isatSlope, temperature);
+      const isatNow = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
       const isatShift = isatNow === null || isatSolved === null || isatNow === isatSolved ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
       const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
       if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
@@ -218,7 +234,7 @@ export class CornerSolver {
       }
       op.drops.dcr = dcrHot;
       solveWaveform(op, this.curve, solution);
-      core = coreLossOf(part, solution, spec.fsw);
+      core = part.coreLoss === null ? null : coreLossOf(part, solution, spec.fsw);
     }
     const ripple = solution.ipk - solution.ivalley;
     if (part !== this.guessPart) this.startPart();
@@ -227,13 +243,13 @@ export class CornerSolver {
     this.guessIout[keep] = iout;
     this.guessTemperature[keep] = temperature;
     this.temperature = temperature;
-    this.tempRise = thermal && !solution.unreachable ? temperature - spec.ambient : null;
-    this.dcrHot = dcrHot;
-    this.dcrLoss = dcrHot === null ? 0 : solution.meanSquare * dcrHot;
-    this.acLoss = dcrHot === null ? 0 : acLossFactor(solution, part.acFactor) * dcrHot;
+    this.riseK = thermal && !solution.unreachable ? temperature - spec.ambient : NaN;
+    this.dcrHotOhm = dcrHot;
+    this.dcrLoss = dcr20 === null ? 0 : solution.meanSquare * dcrHot;
+    this.acLoss = dcr20 === null || part.acFactor === 1 ? 0 : acLossFactor(solution, part.acFactor) * dcrHot;
     this.coreLoss = core;
     this.totalLoss = this.dcrLoss + this.acLoss + (core ?? 0);
-    this.isatAtTemp = isatFromSlope(part.isat, prepared.isatSlope, temperature);
+    this.isatAtTemp = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
     this.irms = Math.sqrt(solution.meanSquare);
     this.ripple = ripple;
   }

@@ -275,9 +275,13 @@ export class RollOffCurve implements FluxCurve {
   private lastInverseHy = 0;
   private inverseIk = 0;
   private grid: Float64Array;
-  // The last flux() answer: the mode test and the valley's first guess both ask for λ(IL).
+  // The normalised flux y(I/Ik) (signed) and rampCentre's n·x^(n−1) of the last current asked
+  // about. They depend on I, Ik and n only, not on L0, so they outlive set() while Ik and n stay:
+  // a part's three inductance corners at one load ask for the same current, and the mode test
+  // and the valley's first guess ask for it again.
   private lastFluxCurrent = NaN;
-  private lastFlux = 0;
+  private lastFluxY = 0;
+  private lastCurvature = 0;
 
   constructor(inductance: number, ik: number, n: number) {
     this.table = rollOffTable(n);
@@ -286,19 +290,20 @@ export class RollOffCurve implements FluxCurve {
   }
 
   set(inductance: number, ik: number, n: number): this {
-    if (n !== this.n) this.table = rollOffTable(n);
+    if (n !== this.n || ik !== this.ik) {
+      if (n !== this.n) this.table = rollOffTable(n);
+      this.ik = ik;
+      this.n = n;
+      this.inverseIk = 1 / ik;
+      this.lastFluxCurrent = NaN;
+    }
     this.inductance = inductance;
-    this.ik = ik;
-    this.n = n;
     this.lambdaScale = inductance * ik;
     this.inverseLambdaScale = 1 / this.lambdaScale;
-    // 1/Ik = L0/(L0·Ik), without a second division.
-    this.inverseIk = inductance * this.inverseLambdaScale;
     this.gScale = inductance * ik * ik;
     this.hScale = inductance * ik * ik * ik;
     this.lambdaLimit = this.table.yMax * this.lambdaScale;
     this.lastY = NaN;
-    this.lastFluxCurrent = NaN;
     return this;
   }
 
@@ -399,16 +404,11 @@ export class RollOffCurve implements FluxCurve {
 
   rampCentre(current: number, swing: number): number {
     const centre = this.flux(current);
-    const x = Math.abs(current) * this.inverseIk;
-    if (x === 0 || x >= this.table.xMax) return centre;
     // i' = (1 + x^n)/L0 and i'' = n·x^(n−1)·(1 + x^n)/(L0²·Ik), so the centre moves by
-    // −(i''/i')·Δλ²/24 = −n·x^(n−1)·Δλ²/(24·L0·Ik). x^n comes from the tabulated slope 1 + x^n.
-    const t = this.table;
-    const position = x * t.inverseStep;
-    const k = Math.min(t.nodes - 2, Math.floor(position));
-    const f = position - k;
-    const xn = (1 - f) * t.packedInX[3 * k + 2]! + f * t.packedInX[3 * k + 5]! - 1;
-    let shift = ((this.n * xn) / x) * swing * swing * this.inverseLambdaScale * (1 / 24);
+    // −(i''/i')·Δλ²/24 = −n·x^(n−1)·Δλ²/(24·L0·Ik); flux() left n·x^(n−1) (0 at x = 0 and beyond the table).
+    const curvature = this.lastCurvature;
+    if (curvature === 0) return centre;
+    let shift = curvature * swing * swing * this.inverseLambdaScale * (1 / 24);
     // Far past the knee the expansion overshoots; Newton finishes from within half a swing.
     if (shift > swing / 2) shift = swing / 2;
     return current < 0 ? centre + shift : centre - shift;
@@ -436,26 +436,33 @@ export class RollOffCurve implements FluxCurve {
   }
 
   flux(current: number): number {
-    if (current === this.lastFluxCurrent) return this.lastFlux;
+    if (current !== this.lastFluxCurrent) this.normalisedFlux(current);
+    return this.lastFluxY * this.lambdaScale;
+  }
+
+  /** y(|I|/Ik) with the sign of I, and n·x^(n−1) for rampCentre, into the last-current fields. */
+  private normalisedFlux(current: number): void {
     const x = Math.abs(current) * this.inverseIk;
     const t = this.table;
-    let lambda: number;
-    if (x >= t.xMax) lambda = Math.sign(current) * this.lambdaLimit;
-    else {
-      const position = x * t.inverseStep;
-      const k = Math.min(t.nodes - 2, Math.floor(position));
-      const s = position - k;
-      const d = t.packedInX;
-      // Hermite in x with dy/dx = 1/slope (stored times the step).
-      const s2 = s * s;
-      const s3 = s2 * s;
-      const o = 3 * k;
-      const y = (2 * s3 - 3 * s2 + 1) * d[o]! + (s3 - 2 * s2 + s) * d[o + 1]! + (-2 * s3 + 3 * s2) * d[o + 3]! + (s3 - s2) * d[o + 4]!;
-      lambda = Math.sign(current) * y * this.lambdaScale;
-    }
     this.lastFluxCurrent = current;
-    this.lastFlux = lambda;
-    return lambda;
+    if (x >= t.xMax) {
+      this.lastFluxY = Math.sign(current) * t.yMax;
+      this.lastCurvature = 0;
+      return;
+    }
+    const position = x * t.inverseStep;
+    const k = Math.min(t.nodes - 2, Math.floor(position));
+    const s = position - k;
+    const d = t.packedInX;
+    // Hermite in x with dy/dx = 1/slope (stored times the step).
+    const s2 = s * s;
+    const s3 = s2 * s;
+    const o = 3 * k;
+    const y = (2 * s3 - 3 * s2 + 1) * d[o]! + (s3 - 2 * s2 + s) * d[o + 1]! + (-2 * s3 + 3 * s2) * d[o + 3]! + (s3 - s2) * d[o + 4]!;
+    this.lastFluxY = Math.sign(current) * y;
+    // x^n from the tabulated slope 1 + x^n, linear between the nodes.
+    const xn = (1 - s) * d[o + 2]! + s * d[o + 5]! - 1;
+    this.lastCurvature = x === 0 ? 0 : (this.n * xn) / x;
   }
 
   inductanceAt(current: number): number {
