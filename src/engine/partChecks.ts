@@ -1,4 +1,4 @@
-import type { Check, CheckName, CheckStatus, Part, Spec } from "./types.ts";
+import type { Check, CheckName, CheckStatus, Part, Spec, Targets } from "./types.ts";
 import type { CornerAccumulator } from "./cornerAccumulator.ts";
 import { formatPercent, formatQuantity } from "./formatQuantity.ts";
 import { assertNever } from "./assertNever.ts";
@@ -43,6 +43,22 @@ const LIMITS = [
   ["footprint", footprint, "maxFootprint"],
   ["price", (p: Part) => p.price, "maxPrice"],
 ] as const;
+
+let limitsOf: Targets | null = null;
+let limitsSet = false;
+
+/**
+ * Whether the targets set any size or price limit, worked out once per targets object: usually
+ * none is, and the lookups by key of the loop over LIMITS are slow in a ranking's hot path.
+ * Targets are not edited in place (a spec change makes a new spec, as parseSpec and the app do).
+ */
+function anyLimit(t: Targets): boolean {
+  if (t !== limitsOf) {
+    limitsOf = t;
+    limitsSet = LIMITS.some(([, , key]) => t[key] !== null);
+  }
+  return limitsSet;
+}
 
 /**
  * Every check of one part from its accumulated corners: the verdicts first (cheap), then, when
@@ -105,6 +121,7 @@ export function judgeChecks(spec: Spec, part: Part, acc: CornerAccumulator, chec
     checks.add("srf", part.srf >= needed ? "pass" : "fail", part.srf / needed - 1);
   }
 
+  if (!anyLimit(t)) return;
   for (const [name, value, key] of LIMITS) {
     const max = t[key];
     if (max === null) continue;
