@@ -115,8 +115,10 @@ export class CornerAccumulator {
     this.lightLoadMode = "ccm";
   }
 
-  add(wave: CornerWave, losses: CornerLosses, vin: number, iout: number, index: number): void {
+  /** One corner's figures; `at` holds its vin and iout (a CornerPoint, or the screener's reused record). */
+  add(wave: CornerWave, losses: CornerLosses, at: { vin: number; iout: number }, index: number): void {
     this.corners++;
+    const { vin, iout } = at;
     if (wave.unreachable) {
       if (this.firstUnreachable < 0) this.firstUnreachable = index;
       return;

@@ -15,6 +15,13 @@ const THERMAL_ITERATIONS = 20;
 const DROP_TOLERANCE = 1e-4;
 const ISAT_TOLERANCE = 1e-3;
 
+/** Where a corner is: a CornerPoint, or a screener's reused record of one. */
+export interface CornerAt {
+  vin: number;
+  iout: number;
+  inductance: number;
+}
+
 /** Per-part constants shared by all of a part's corners. */
 export interface PreparedPart {
   part: Part;
@@ -188,8 +195,9 @@ export class CornerSolver {
    * One operating corner: the waveform, losses and temperature, with the winding resistance,
    * the saturation current and the temperature solved together as a fixed point.
    */
-  solve(prepared: PreparedPart, vin: number, iout: number, inductance: number): void {
+  solve(prepared: PreparedPart, point: CornerAt): void {
     const { spec, op, balance } = this;
+    const { vin, iout, inductance } = point;
     const { part, dcr20, ratedPower } = prepared;
     const thermal = ratedPower !== null && dcr20 !== null;
     balance.inverseRatedPower = prepared.inverseRatedPower;
@@ -315,6 +323,6 @@ export class CornerSolver {
 /** One operating corner of one part (see CornerSolver.solve). */
 export function evaluateCorner(spec: Spec, part: Part, point: CornerPoint, prepared: PreparedPart = preparePart(part)): CornerResult {
   const solver = new CornerSolver(spec);
-  solver.solve(prepared, point.vin, point.iout, point.inductance);
+  solver.solve(prepared, point);
   return solver.result(point);
 }

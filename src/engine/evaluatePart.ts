@@ -46,8 +46,8 @@ export function evaluatePart(spec: Spec, part: Part, solver: CornerSolver = new 
   const acc = new CornerAccumulator(spec, part.isat);
   solver.startPart();
   const corners = points.map((p, index) => {
-    solver.solve(prepared, p.vin, p.iout, p.inductance);
-    acc.add(solver.solution, solver, p.vin, p.iout, index);
+    solver.solve(prepared, p);
+    acc.add(solver.solution, solver, p, index);
     return solver.result(p);
   });
   const tolerance = effectiveTolerance(spec, part);

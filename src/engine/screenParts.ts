@@ -1,6 +1,6 @@
 import type { Mode, Part, ResultStatus, Spec } from "./types.ts";
 import { effectiveTolerance, inputVoltagePoints } from "./cornerPoints.ts";
-import { CornerSolver, preparePart, type PreparedPart } from "./evaluateCorner.ts";
+import { type CornerAt, CornerSolver, preparePart, type PreparedPart } from "./evaluateCorner.ts";
 import { CornerAccumulator } from "./cornerAccumulator.ts";
 import { CheckBuffer, judgeChecks } from "./partChecks.ts";
 import { minimumMargin, statusOf } from "./evaluatePart.ts";
@@ -97,6 +97,9 @@ export class PartScreener {
   private readonly acc: CornerAccumulator;
   private readonly checks = new CheckBuffer();
   private prepared: PreparedPart | undefined;
+  // The corner being solved, handed over by reference: V8 boxes each double passed to a call it
+  // does not inline (solve and add are too large), while this record's fields are updated in place.
+  private readonly at: CornerAt = { vin: 0, iout: 0, inductance: 0 };
   private readonly verdict: PartVerdict = {
     status: "pass",
     failures: 0,
@@ -132,15 +135,19 @@ export class PartScreener {
     const tolerance = effectiveTolerance(spec, part);
     acc.reset(part.isat, spec);
     const { vins, loads } = cornerGrid(spec);
+    const at = this.at;
     solver.startPart();
     let index = 0;
     let lightReachable = false;
     for (const vin of vins) {
       for (const iout of loads) {
         for (let k = tolerance > 0 ? -1 : 0; k <= (tolerance > 0 ? 1 : 0); k++) {
-          solver.solve(prepared, vin, iout, part.inductance * (1 + k * tolerance));
+          at.vin = vin;
+          at.iout = iout;
+          at.inductance = part.inductance * (1 + k * tolerance);
+          solver.solve(prepared, at);
           if (iout === spec.iout.min && !solver.solution.unreachable) lightReachable = true;
-          acc.add(solver.solution, solver, vin, iout, index++);
+          acc.add(solver.solution, solver, at, index++);
         }
       }
     }
