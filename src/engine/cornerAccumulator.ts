@@ -9,7 +9,11 @@ export interface CornerWave {
   unreachable: boolean;
 }
 
-/** The loss and thermal figures of a corner (a CornerResult or a CornerSolver). */
+/**
+ * The loss and thermal figures of a corner, as a CornerSolver holds them. The two that may be
+ * missing are plain numbers, NaN when missing: read as number | null they would be boxed at
+ * every corner of a ranking.
+ */
 export interface CornerLosses {
   irms: number;
   ripple: number;
@@ -17,9 +21,11 @@ export interface CornerLosses {
   totalLoss: number;
   dcrLoss: number;
   coreLoss: number | null;
-  tempRise: number | null;
+  /** Temperature rise, K; NaN when not modelled. */
+  riseK: number;
   temperature: number;
-  isatAtTemp: number | null;
+  /** Isat at the corner's temperature, A; NaN without an Isat. */
+  isatHot: number;
 }
 
 /**
@@ -54,7 +60,8 @@ export class CornerAccumulator {
   declare saturationMargin: number;
   declare saturationAt: number;
   declare saturationPeak: number;
-  declare saturationIsat: number | null;
+  /** Isat(T) at the deciding corner, NaN without an Isat. */
+  declare saturationIsat: number;
   declare saturationTemperature: number;
   declare saturationBeyond: boolean;
   /** Ripple ratio over the corners at nominal input and full load. */
@@ -102,7 +109,7 @@ export class CornerAccumulator {
     this.saturationMargin = Infinity;
     this.saturationAt = -1;
     this.saturationPeak = 0;
-    this.saturationIsat = null;
+    this.saturationIsat = NaN;
     this.saturationTemperature = 0;
     this.saturationBeyond = false;
     this.windowCorners = 0;
@@ -152,8 +159,9 @@ export class CornerAccumulator {
       this.coreLoss = losses.coreLoss;
       this.coreLossAt = index;
     }
-    if (losses.tempRise !== null && losses.tempRise > this.tempRise) {
-      this.tempRise = losses.tempRise;
+    // NaN (not modelled) never compares greater.
+    if (losses.riseK > this.tempRise) {
+      this.tempRise = losses.riseK;
       this.tempRiseAt = index;
     }
     if (peak > this.peak) {
@@ -161,13 +169,14 @@ export class CornerAccumulator {
       this.peakAt = index;
     }
     if (this.isat !== null) {
-      const isat = losses.isatAtTemp ?? this.isat;
+      const hot = losses.isatHot;
+      const isat = hot === hot ? hot : this.isat;
       const margin = wave.beyondCurve ? -1 : isat / peak - 1;
       if (margin < this.saturationMargin) {
         this.saturationMargin = margin;
         this.saturationAt = index;
         this.saturationPeak = peak;
-        this.saturationIsat = losses.isatAtTemp;
+        this.saturationIsat = hot;
         this.saturationTemperature = losses.temperature;
         this.saturationBeyond = wave.beyondCurve;
       }

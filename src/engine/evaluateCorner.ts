@@ -34,6 +34,8 @@ export interface PreparedPart {
   isatSlope: number;
   /** Ik/Isat of the roll-off law (NaN without an Isat): Ik scales with Isat, hot or not. */
   kneePerIsat: number;
+  /** Isat at 25 °C, NaN without one: as a number, the solver's reads of it box nothing. */
+  isat: number;
 }
 
 /** DCR used for losses: the maximum where given (worst case), else the typical. */
@@ -49,13 +51,15 @@ export function preparePart(part: Part, out?: PreparedPart): PreparedPart {
   const inverseRatedPower = ratedPower === null ? 1 : 1 / ratedPower;
   const isatSlope = isatSlopePerKelvin(part);
   const kneePerIsat = part.isat === null ? NaN : knee(1, part.isatDrop, part.rollOffExponent);
-  if (out === undefined) return { part, dcr20, ratedPower, inverseRatedPower, isatSlope, kneePerIsat };
+  const isat = part.isat ?? NaN;
+  if (out === undefined) return { part, dcr20, ratedPower, inverseRatedPower, isatSlope, kneePerIsat, isat };
   out.part = part;
   out.dcr20 = dcr20;
   out.ratedPower = ratedPower;
   out.inverseRatedPower = inverseRatedPower;
   out.isatSlope = isatSlope;
   out.kneePerIsat = kneePerIsat;
+  out.isat = isat;
   return out;
 }
 
@@ -99,7 +103,10 @@ export class CornerSolver {
   temperature = 0;
   // Kept as plain numbers (NaN for none) and read as number | null: storing a double into a
   // field that may also hold null makes V8 box it, an allocation at every corner.
-  private riseK = NaN;
+  /** Temperature rise, K, NaN when not modelled (see tempRise). */
+  riseK = NaN;
+  /** Isat at the corner's temperature, A, NaN without an Isat (see isatAtTemp). */
+  isatHot = NaN;
   private dcrHotOhm = NaN;
   /** Temperature rise, null when the part has no thermal model or the corner is unreachable. */
   get tempRise(): number | null {
@@ -115,7 +122,11 @@ export class CornerSolver {
   acLoss = 0;
   coreLoss: number | null = null;
   totalLoss = 0;
-  isatAtTemp: number | null = null;
+  /** Isat at the corner's temperature, null without an Isat. */
+  get isatAtTemp(): number | null {
+    const isat = this.isatHot;
+    return isat === isat ? isat : null;
+  }
   irms = 0;
   ripple = 0;
   /** Ripple over |average inductor current| (Infinity at zero average), worked out when read. */
@@ -182,9 +193,10 @@ export class CornerSolver {
     this.startPart();
   }
 
-  private setCurve(prepared: PreparedPart, inductance: number, isat: number | null): void {
+  /** The curve at one inductance corner, with Isat at the corner's temperature (NaN: constant L). */
+  private setCurve(prepared: PreparedPart, inductance: number, isat: number): void {
     const part = prepared.part;
-    if (isat === null) {
+    if (isat !== isat) {
       this.curve = this.constantCurve.set(inductance);
     } else {
       this.curve = this.rollOffCurve.set(inductance, prepared.kneePerIsat * isat, part.rollOffExponent);
@@ -214,7 +226,7 @@ export class CornerSolver {
     // The calls below are skipped in the common case (no hot Isat, no core-loss data, Fr = 1, where
     // they return Isat, null and the plain I²R term exactly): V8 inlines only so much into one
     // function, and this one is at that limit.
-    let isatSolved = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
+    let isatSolved = prepared.isatSlope === 0 ? prepared.isat : isatFromSlope(prepared.isat, prepared.isatSlope, temperature);
     this.setCurve(prepared, inductance, isatSolved);
     op.vin = vin;
     op.iout = iout;
@@ -232,8 +244,9 @@ export class CornerSolver {
       temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
       dcrHot = resistanceFrom20(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
-      const isatNow = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
-      const isatShift = isatNow === null || isatSolved === null || isatNow === isatSolved ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
+      const isatNow = prepared.isatSlope === 0 ? prepared.isat : isatFromSlope(prepared.isat, prepared.isatSlope, temperature);
+      // 0 also without an Isat (NaN).
+      const isatShift = isatNow === isatSolved || !(isatSolved > 0) ? 0 : Math.abs(isatNow - isatSolved) / isatSolved;
       const dropShift = Math.abs(dcrHot - op.drops.dcr) * Math.abs(solution.iavg);
       if (dropShift <= DROP_TOLERANCE * Math.min(solution.vOn, -solution.vOff) && isatShift <= ISAT_TOLERANCE) break;
       if (isatShift > 0) {
@@ -257,7 +270,7 @@ export class CornerSolver {
     this.acLoss = dcr20 === null || part.acFactor === 1 ? 0 : acLossFactor(solution, part.acFactor) * dcrHot;
     this.coreLoss = core;
     this.totalLoss = this.dcrLoss + this.acLoss + (core ?? 0);
-    this.isatAtTemp = prepared.isatSlope === 0 ? part.isat : isatFromSlope(part.isat, prepared.isatSlope, temperature);
+    this.isatHot = prepared.isatSlope === 0 ? prepared.isat : isatFromSlope(prepared.isat, prepared.isatSlope, temperature);
     this.irms = Math.sqrt(solution.meanSquare);
     this.ripple = ripple;
   }

@@ -145,7 +145,7 @@ function reasonFor(c: Check, spec: Spec, part: Part, acc: CornerAccumulator, des
     case "saturation": {
       if (c.status === "unchecked") return "saturation not checked (no data)";
       const hot =
-        acc.saturationIsat !== null && acc.saturationIsat !== part.isat ? ` (${A(acc.saturationIsat)} at ${Math.round(acc.saturationTemperature)} °C)` : "";
+        !Number.isNaN(acc.saturationIsat) && acc.saturationIsat !== part.isat ? ` (${A(acc.saturationIsat)} at ${Math.round(acc.saturationTemperature)} °C)` : "";
       if (acc.saturationBeyond) return `driven past saturation at ${at(c.cornerIndex)}: the current leaves the modelled curve`;
       if (pass) return `peak ${A(acc.saturationPeak)} at ${at(c.cornerIndex)}; Isat ${A(part.isat)}${hot}, margin ${formatPercent(c.margin)}`;
       const needed = (1 + t.saturationMargin) * acc.saturationPeak;

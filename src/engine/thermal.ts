@@ -31,7 +31,7 @@ export function ratedHeatingPower(part: Part): number | null {
  * linearly with temperature, from memory), never below a twentieth of Isat.
  */
 export function isatAtTemperature(part: Part, tC: number): number | null {
-  return isatFromSlope(part.isat, isatSlopePerKelvin(part), tC);
+  return part.isat === null ? null : isatFromSlope(part.isat, isatSlopePerKelvin(part), tC);
 }
 
 /** dIsat/dT above 25 °C from the hot rating, 0 when the list gives none. */
@@ -40,9 +40,12 @@ export function isatSlopePerKelvin(part: Part): number {
   return (part.isatHot - part.isat) / (part.isatHotTemp - 25);
 }
 
-/** isatAtTemperature from Isat at 25 °C and its slope (kept small: it sits on the ranking's hot path). */
-export function isatFromSlope(isat: number | null, slopePerKelvin: number, tC: number): number | null {
-  if (isat === null || slopePerKelvin === 0 || tC <= 25) return isat;
+/**
+ * isatAtTemperature from Isat at 25 °C and its slope; NaN (no Isat) gives NaN. Kept small and
+ * free of null: it sits on the ranking's hot path.
+ */
+export function isatFromSlope(isat: number, slopePerKelvin: number, tC: number): number {
+  if (slopePerKelvin === 0 || tC <= 25) return isat;
   return Math.max(isat * 0.05, isat + slopePerKelvin * (tC - 25));
 }
 
