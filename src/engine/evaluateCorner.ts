@@ -171,7 +171,7 @@ export class CornerSolver {
       inverseRatedPower: 1,
       ratedRise: 40,
       exponent: spec.thermalExponent,
-      start: spec.ambient,
+      temperature: spec.ambient,
     };
   }
 
@@ -215,13 +215,14 @@ export class CornerSolver {
     balance.inverseRatedPower = prepared.inverseRatedPower;
     balance.ratedRise = part.irmsRise;
     balance.otherLoss = 0;
-    balance.start = spec.ambient;
+    balance.temperature = spec.ambient;
     let temperature = spec.ambient;
     const slot = iout === this.guessIout[0] ? 0 : iout === this.guessIout[1] ? 1 : -1;
     if (thermal && part === this.guessPart && slot >= 0) {
       temperature = this.guessTemperature[slot]!;
     } else if (thermal) {
-      temperature = this.coldStart(vin, iout, dcr20);
+      this.coldStart(vin, iout, dcr20);
+      temperature = balance.temperature;
     }
     // The calls below are skipped in the common case (no hot Isat, no core-loss data, Fr = 1, where
     // they return Isat, null and the plain I²R term exactly): V8 inlines only so much into one
@@ -240,8 +241,9 @@ export class CornerSolver {
     for (let iteration = 0; thermal && !solution.unreachable && iteration < THERMAL_ITERATIONS; iteration++) {
       balance.copperLossAt20 = part.acFactor === 1 ? solution.meanSquare * dcr20 : windingLoss(solution, dcr20, part.acFactor);
       balance.otherLoss = core ?? 0;
-      balance.start = temperature;
-      temperature = Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+      balance.temperature = temperature;
+      settleTemperature(balance);
+      temperature = balance.temperature;
       dcrHot = resistanceFrom20(dcr20, temperature);
       if (temperature >= RUNAWAY_TEMPERATURE) break;
       const isatNow = prepared.isatSlope === 0 ? prepared.isat : isatFromSlope(prepared.isat, prepared.isatSlope, temperature);
@@ -278,13 +280,14 @@ export class CornerSolver {
   /**
    * First temperature guess of a part at a load: the rise that the DC part of the inductor
    * current alone would cause. Apart from solve() because it runs at two corners in eighteen,
-   * and V8 inlines a limited amount into one function: the hot path gets that budget.
+   * and V8 inlines a limited amount into one function: the hot path gets that budget. Leaves
+   * the guess in balance.temperature.
    */
-  private coldStart(vin: number, iout: number, dcr20: number): number {
+  private coldStart(vin: number, iout: number, dcr20: number): void {
     const { spec, balance } = this;
     const il = inductorCurrentCcm(spec.topology, iout, idealDuty(spec.topology, vin, spec.vout));
     balance.copperLossAt20 = il * il * dcr20;
-    return Math.min(RUNAWAY_TEMPERATURE, settleTemperature(balance));
+    settleTemperature(balance);
   }
 
   /** Forgets the warm start, so that a part's corners come out the same whichever part came before. */

@@ -64,8 +64,12 @@ export interface ThermalBalance {
   inverseRatedPower: number;
   ratedRise: number;
   exponent: number;
-  /** Where Newton starts, °C. */
-  start: number;
+  /**
+   * In: where Newton starts, °C. Out: the settled temperature (RUNAWAY_TEMPERATURE at most).
+   * Returned through the object rather than as a value: a double returned by a call V8 does not
+   * inline is boxed, at every corner of a ranking.
+   */
+  temperature: number;
 }
 
 /**
@@ -74,14 +78,14 @@ export interface ThermalBalance {
  * this is the self-consistent form ΔT = Rth·P20·(…)/(1 − Rth·P20·α20), which runs away when
  * Rth·P20·α20 ≥ 1.
  */
-export function settleTemperature(b: ThermalBalance): number {
+export function settleTemperature(b: ThermalBalance): void {
   // P(T) = base + slope·T.
   const slope = b.copperLossAt20 * COPPER_ALPHA20;
   const base = b.copperLossAt20 - slope * 20 + b.otherLoss;
   const power = powerTable(b.exponent);
   const inverseRated = b.inverseRatedPower;
   const k = b.exponent;
-  let t = b.start;
+  let t = b.temperature;
   for (let iteration = 0; iteration < 50; iteration++) {
     const p = base + slope * t;
     let step: number;
@@ -89,18 +93,24 @@ export function settleTemperature(b: ThermalBalance): number {
       const rise = b.ratedRise * power.pow(p * inverseRated);
       // h'(T) = 1 − k·rise·slope/P; multiplied through by P so that the step takes one division.
       const dhTimesP = p - k * rise * slope;
-      if (!(dhTimesP > 0)) return RUNAWAY_TEMPERATURE;
+      if (!(dhTimesP > 0)) {
+        b.temperature = RUNAWAY_TEMPERATURE;
+        return;
+      }
       step = ((t - b.ambient - rise) * p) / dhTimesP;
     } else {
       step = t - b.ambient;
     }
     const next = Math.max(t - step, b.ambient);
-    if (!(next < RUNAWAY_TEMPERATURE)) return RUNAWAY_TEMPERATURE;
+    if (!(next < RUNAWAY_TEMPERATURE)) {
+      b.temperature = RUNAWAY_TEMPERATURE;
+      return;
+    }
     t = next;
     // Newton's error after a step e is about |h''/(2h')|·e², and h'' = k(1 − k)·rise·(slope/P)² is
     // of the order of 1e-4 /K (copper adds about 0.4 %/K): after a step under 1 K the error left
     // is below 1e-4 K.
-    if (Math.abs(step) < NEWTON_STEP_K) return t;
+    if (Math.abs(step) < NEWTON_STEP_K) break;
   }
-  return t;
+  b.temperature = t;
 }
