@@ -105,6 +105,30 @@ describe("RollOffCurve.rampCentre", () => {
     }
   });
 
+  it("a reused RollOffCurve gives a fresh curve's flux and ramp centre after set() to another L0, Ik or n", () => {
+    // The curve keeps y(I/Ik) of the last current across set() while Ik and n stay the same.
+    const reused = new RollOffCurve(4.7e-6, 12, 2);
+    const settings: [number, number, number][] = [
+      [3.76e-6, 12, 2],
+      [5.64e-6, 12, 2],
+      [5.64e-6, 9, 2],
+      [5.64e-6, 9, 6],
+      [4.7e-6, 12, 2],
+    ];
+    for (const [l0, ik, n] of settings) {
+      reused.set(l0, ik, n);
+      const fresh = new RollOffCurve(l0, ik, n);
+      for (const [current, swing] of [
+        [8, 3e-6],
+        [-5, 1e-6],
+        [400, 1e-6],
+      ] as const) {
+        expect(reused.flux(current)).toBe(fresh.flux(current));
+        expect(reused.rampCentre(current, swing)).toBe(fresh.rampCentre(current, swing));
+      }
+    }
+  });
+
   it("rampCentre is λ = L·I for constant L", () => {
     const curve: FluxCurve = new ConstantInductance(2e-6);
     expect(curve.rampCentre(3, 1e-6)).toBeCloseTo(6e-6, 18);
