@@ -122,6 +122,8 @@ describe("RollOffCurve.rampCentre", () => {
         [8, 3e-6],
         [-5, 1e-6],
         [400, 1e-6],
+        // Last here and first after the next set(): the kept value is the one asked again.
+        [8, 3e-6],
       ] as const) {
         expect(reused.flux(current)).toBe(fresh.flux(current));
         expect(reused.rampCentre(current, swing)).toBe(fresh.rampCentre(current, swing));
