@@ -12,8 +12,8 @@ const DIGIT_MASK = 2 ** DIGIT_BITS - 1;
  * failed checks (fewest first), then score (high first), ties in list order. Each part gets one
  * packed numeric key (status · failure class · score quantised to 1e-4, 26 bits), sorted by a
  * stable least-significant-digit radix sort (two counting passes over 13-bit digits): ties keep
- * list order without a comparator, and 100 000 parts take about a millisecond rather than the
- * ten of a typed-array sort of 47-bit keys.
+ * list order without a comparator, and 100 000 parts take about 4 ms with the keys rather than
+ * the 12 ms of a typed-array sort of 47-bit keys (index included).
  */
 export function rankOrder(status: ArrayLike<ResultStatus>, score: ArrayLike<number>, failures?: ArrayLike<number>): Int32Array {
   const n = status.length;
