@@ -10,8 +10,8 @@ export interface CornerWave {
 }
 
 /**
- * The loss and thermal figures of a corner, as a CornerSolver holds them. The two that may be
- * missing are plain numbers, NaN when missing: read as number | null they would be boxed at
+ * The loss and thermal figures of a corner, as a CornerSolver holds them. The temperature rise and
+ * the hot Isat are plain numbers, NaN when missing: read as number | null they would be boxed at
  * every corner of a ranking.
  */
 export interface CornerLosses {

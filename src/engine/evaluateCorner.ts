@@ -101,8 +101,8 @@ function acLossFactor(solution: WaveformSolution, acFactor: number): number {
 export class CornerSolver {
   readonly solution: WaveformSolution = emptySolution();
   temperature = 0;
-  // Kept as plain numbers (NaN for none) and read as number | null: storing a double into a
-  // field that may also hold null makes V8 box it, an allocation at every corner.
+  // Kept as plain numbers (NaN for none), with number | null getters for CornerResult: storing a
+  // double into a field that may also hold null makes V8 box it, an allocation at every corner.
   /** Temperature rise, K, NaN when not modelled (see tempRise). */
   riseK = NaN;
   /** Isat at the corner's temperature, A, NaN without an Isat (see isatAtTemp). */
